@@ -1,0 +1,2 @@
+/** Records and enums shared by every stage. Depends on the JDK only. */
+package riffle.model;
