@@ -1,0 +1,245 @@
+package riffle.app;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.security.DigestInputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.text.Normalizer;
+import java.time.DateTimeException;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import riffle.ingest.CodeList;
+import riffle.ingest.Column;
+import riffle.ingest.NonAnswers;
+import riffle.ingest.SurveyReader;
+import riffle.ingest.SurveyRow;
+import riffle.ingest.SurveyTable;
+import riffle.ingest.UnreadableInputException;
+import riffle.model.BatchOutcome;
+import riffle.model.ColumnRole;
+import riffle.model.InputProblem;
+import riffle.model.NewAnswer;
+import riffle.model.NewRespondent;
+import riffle.model.Progress;
+import riffle.model.WaveBatch;
+import riffle.store.ProjectFileException;
+import riffle.store.ProjectStore;
+
+/** Reads an export and stores it as (part of) a wave, all in one transaction. */
+final class WaveImporter {
+  /** The coder recorded for imported codes when the export has no coder column. */
+  static final String DEFAULT_CODER = "import";
+
+  private final ProjectStore store;
+
+  WaveImporter(ProjectStore store) {
+    this.store = store;
+  }
+
+  /** Stores a table read by {@link #read} as (part of) the requested wave. */
+  ImportReport store(ImportRequest request, SurveyTable table, Progress progress)
+      throws ProjectFileException {
+    String wave = request.wave().map(String::strip).orElseGet(() -> defaultWave(request));
+    if (wave.isEmpty()) {
+      throw new IllegalArgumentException("the wave name is empty; give one with --wave NAME");
+    }
+    Optional<LocalDate> stored = store.waveDate(wave);
+    if (stored.isPresent()
+        && request.fieldedOn().isPresent()
+        && !stored.get().equals(request.fieldedOn().get())) {
+      throw new IllegalArgumentException(
+          "wave \""
+              + wave
+              + "\" is dated "
+              + stored.get()
+              + ", not "
+              + request.fieldedOn().get()
+              + "; leave out --date to add to it, or name a new wave");
+    }
+    LocalDate date =
+        stored.or(request::fieldedOn).orElseGet(() -> latestDate(table).orElse(LocalDate.now()));
+
+    List<Column> texts = table.columnsWith(ColumnRole.TEXT);
+    List<String> questions = texts.stream().map(Column::header).toList();
+    List<NewRespondent> respondents = respondents(table, texts);
+    WaveBatch batch =
+        new WaveBatch(
+            wave,
+            date,
+            table.source(),
+            sha256(request),
+            table.encoding(),
+            table.delimiter().label(),
+            table.rows().size(),
+            table.skippedRows(),
+            questions,
+            respondents,
+            request.actor());
+    BatchOutcome outcome = store.store(batch, progress);
+    List<InputProblem> problems = new ArrayList<>(table.problems());
+    problems.addAll(outcome.problems());
+    return new ImportReport(
+        wave,
+        date,
+        table.source(),
+        table.encoding(),
+        table.delimiter().label(),
+        table.columns().stream()
+            .map(c -> new ImportReport.ColumnReport(c.header(), c.role(), c.detected()))
+            .toList(),
+        table.rows().size(),
+        outcome.answersAdded(),
+        table.skippedRows(),
+        outcome.duplicateRows(),
+        outcome.codesCreated(),
+        outcome.assignmentsAdded(),
+        problems);
+  }
+
+  /** Reads the request's export, before any project is opened. */
+  static SurveyTable read(ImportRequest request, Progress progress)
+      throws UnreadableInputException {
+    progress.update("reading", 0, -1);
+    ImportSource source = request.source();
+    if (source instanceof ImportSource.File f) {
+      return SurveyReader.readFile(f.path(), request.settings());
+    }
+    if (source instanceof ImportSource.Paste p) {
+      return SurveyReader.readPaste(p.text(), request.settings());
+    }
+    ImportSource.Bytes b = (ImportSource.Bytes) source;
+    return SurveyReader.readBytes(b.name(), b.bytes(), request.settings());
+  }
+
+  private String defaultWave(ImportRequest request) {
+    if (request.source() instanceof ImportSource.File f) {
+      return baseName(f.path().getFileName().toString());
+    }
+    if (request.source() instanceof ImportSource.Bytes b) {
+      return baseName(b.name());
+    }
+    try {
+      return "Wave " + (store.waveCount() + 1);
+    } catch (ProjectFileException e) {
+      return "Pasted wave";
+    }
+  }
+
+  private static String baseName(String fileName) {
+    int dot = fileName.lastIndexOf('.');
+    return dot > 0 ? fileName.substring(0, dot) : fileName;
+  }
+
+  private static List<NewRespondent> respondents(SurveyTable table, List<Column> texts) {
+    Optional<Column> id = first(table, ColumnRole.ID);
+    Optional<Column> date = first(table, ColumnRole.DATE);
+    Optional<Column> coder = first(table, ColumnRole.CODER);
+    List<Column> metas = table.columnsWith(ColumnRole.META);
+    List<Column> codes = table.columnsWith(ColumnRole.CODES);
+    List<NewRespondent> out = new ArrayList<>(table.rows().size());
+    for (SurveyRow row : table.rows()) {
+      String externalId = id.map(c -> row.cell(c).strip()).orElse("");
+      if (externalId.isEmpty()) {
+        externalId = "row-" + row.number();
+      }
+      Map<String, String> meta = new LinkedHashMap<>();
+      for (Column m : metas) {
+        String value = row.cell(m).strip();
+        if (!value.isEmpty()) {
+          meta.put(m.header(), value);
+        }
+      }
+      String coderName = coder.map(c -> row.cell(c).strip()).orElse("");
+      if (coderName.isEmpty()) {
+        coderName = DEFAULT_CODER;
+      }
+      List<NewAnswer> answers = new ArrayList<>(texts.size());
+      for (Column t : texts) {
+        String original = row.cell(t);
+        List<String> assigned = new ArrayList<>();
+        for (Column c : codes) {
+          if (c.answersColumn() == t.index()) {
+            assigned.addAll(CodeList.split(row.cell(c)));
+          }
+        }
+        answers.add(
+            new NewAnswer(
+                t.header(),
+                original,
+                Normalizer.normalize(original, Normalizer.Form.NFC),
+                !NonAnswers.isNonAnswer(original),
+                row.line(),
+                t.index() + 1,
+                assigned,
+                coderName));
+      }
+      out.add(
+          new NewRespondent(
+              externalId,
+              row.line(),
+              date.map(c -> row.cell(c).strip()).orElse(""),
+              meta,
+              answers));
+    }
+    return out;
+  }
+
+  private static Optional<Column> first(SurveyTable table, ColumnRole role) {
+    return table.columnsWith(role).stream().findFirst();
+  }
+
+  /** The latest ISO date (the first ten characters of a date or date-time) in the date column. */
+  private static Optional<LocalDate> latestDate(SurveyTable table) {
+    Optional<Column> column = first(table, ColumnRole.DATE);
+    if (column.isEmpty()) {
+      return Optional.empty();
+    }
+    LocalDate latest = null;
+    for (SurveyRow row : table.rows()) {
+      String cell = row.cell(column.get()).strip();
+      if (cell.length() < 10) {
+        continue;
+      }
+      try {
+        LocalDate d = LocalDate.parse(cell.substring(0, 10));
+        if (latest == null || d.isAfter(latest)) {
+          latest = d;
+        }
+      } catch (DateTimeException e) {
+        // Not ISO: the column may use another format; the wave then takes today's date.
+      }
+    }
+    return Optional.ofNullable(latest);
+  }
+
+  private static String sha256(ImportRequest request) {
+    MessageDigest digest;
+    try {
+      digest = MessageDigest.getInstance("SHA-256");
+    } catch (NoSuchAlgorithmException e) {
+      throw new IllegalStateException("this Java runtime lacks SHA-256", e);
+    }
+    ImportSource source = request.source();
+    if (source instanceof ImportSource.File f) {
+      try (InputStream in = new DigestInputStream(Files.newInputStream(f.path()), digest)) {
+        in.transferTo(OutputStream.nullOutputStream());
+      } catch (IOException e) {
+        // The file was just read in full; if it vanished since, the digest stays partial.
+      }
+    } else if (source instanceof ImportSource.Paste p) {
+      digest.update(p.text().getBytes(StandardCharsets.UTF_8));
+    } else {
+      digest.update(((ImportSource.Bytes) source).bytes());
+    }
+    return HexFormat.of().formatHex(digest.digest());
+  }
+}

@@ -1,0 +1,208 @@
+package riffle.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+import riffle.app.ImportReport;
+import riffle.app.ImportRequest;
+import riffle.app.ImportSource;
+import riffle.app.Project;
+import riffle.ingest.Delimiter;
+import riffle.ingest.ImportSettings;
+import riffle.model.ColumnRole;
+import riffle.model.InputProblem;
+
+/** {@code riffle import}: brings one survey export in as (part of) a wave. */
+@Command(
+    name = "import",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Brings a survey export (CSV/TSV file, or cells pasted on standard input) in as a wave.",
+      "Encoding, delimiter and column roles are detected unless named. Importing the same rows",
+      "into the same wave again adds nothing. An unusable file changes nothing and exits 2."
+    })
+final class ImportCommand implements Callable<Integer>, JsonCommand {
+  @Spec CommandSpec spec;
+
+  @ParentCommand Main main;
+
+  @Option(
+      names = "--project",
+      required = true,
+      paramLabel = "P",
+      description = "Project file (NAME.riffle); created when missing.")
+  Path project;
+
+  @ArgGroup(multiplicity = "1")
+  Input input;
+
+  static final class Input {
+    @Option(names = "--file", paramLabel = "F", description = "The export to read.")
+    Path file;
+
+    @Option(
+        names = "--paste",
+        description = "Read cells pasted from a spreadsheet (tab-separated text) from stdin.")
+    boolean paste;
+  }
+
+  @Option(
+      names = "--wave",
+      paramLabel = "NAME",
+      description = "Wave to import into (default: the file's name, or \"Wave N\" for a paste).")
+  String wave;
+
+  @Option(
+      names = "--date",
+      paramLabel = "YYYY-MM-DD",
+      converter = Dates.class,
+      description = "When the wave was fielded (default: the latest answer date, else today).")
+  LocalDate date;
+
+  @Option(
+      names = "--text-column",
+      paramLabel = "C",
+      description = "An open-text question column (repeatable); detected when none is named.")
+  List<String> textColumns = new ArrayList<>();
+
+  @Option(names = "--id-column", paramLabel = "C", description = "Respondent id column.")
+  String idColumn;
+
+  @Option(names = "--date-column", paramLabel = "C", description = "Response date column.")
+  String dateColumn;
+
+  @Option(
+      names = "--codes-column",
+      paramLabel = "C",
+      description =
+          "Codes assigned elsewhere, separated by ; or | (repeatable); they belong to the"
+              + " nearest question column on the left.")
+  List<String> codesColumns = new ArrayList<>();
+
+  @Option(names = "--coder-column", paramLabel = "C", description = "Who assigned those codes.")
+  String coderColumn;
+
+  @Option(
+      names = "--meta-column",
+      paramLabel = "C",
+      description = "A segment column to keep, such as device or plan (repeatable).")
+  List<String> metaColumns = new ArrayList<>();
+
+  @Option(
+      names = "--delimiter",
+      paramLabel = "auto|,|;|tab|pipe",
+      defaultValue = "auto",
+      description = "Field delimiter (default: ${DEFAULT-VALUE}).")
+  String delimiter;
+
+  @Option(
+      names = "--encoding",
+      paramLabel = "auto|NAME",
+      defaultValue = "auto",
+      description = "Text encoding, such as UTF-8 or windows-1252 (default: ${DEFAULT-VALUE}).")
+  String encoding;
+
+  @Option(
+      names = "--max-mb",
+      paramLabel = "N",
+      defaultValue = "100",
+      description = "Refuse exports larger than N MiB (default: ${DEFAULT-VALUE}).")
+  long maxMb;
+
+  @Option(names = "--json", description = "Print one JSON document instead of text.")
+  boolean json;
+
+  @Override
+  public boolean json() {
+    return json;
+  }
+
+  @Override
+  public Integer call() throws IOException {
+    ImportSettings.Builder settings =
+        ImportSettings.builder()
+            .delimiter(Delimiter.parse(delimiter).orElse(null))
+            .encoding(encoding)
+            .maxBytes(Math.multiplyExact(maxMb, 1024L * 1024L));
+    textColumns.forEach(settings::textColumn);
+    codesColumns.forEach(settings::codesColumn);
+    metaColumns.forEach(settings::metaColumn);
+    if (idColumn != null) {
+      settings.idColumn(idColumn);
+    }
+    if (dateColumn != null) {
+      settings.dateColumn(dateColumn);
+    }
+    if (coderColumn != null) {
+      settings.coderColumn(coderColumn);
+    }
+    ImportSource source =
+        input.paste
+            ? new ImportSource.Paste(new String(main.in.readAllBytes(), StandardCharsets.UTF_8))
+            : new ImportSource.File(input.file);
+    ImportRequest request =
+        new ImportRequest(
+            source,
+            Optional.ofNullable(wave),
+            Optional.ofNullable(date),
+            settings.get(),
+            Actor.current());
+    ImportReport report = Project.importInto(project, request, TerminalProgress.forStderr());
+    PrintWriter out = spec.commandLine().getOut();
+    if (json) {
+      Json.print(out, report);
+    } else {
+      print(out, report);
+    }
+    return 0;
+  }
+
+  private static void print(PrintWriter out, ImportReport r) {
+    out.printf(
+        "Imported into wave \"%s\" (fielded %s) from %s%n", r.wave(), r.fieldedOn(), r.source());
+    out.printf("  read as %s, %s-separated%n", r.encoding(), r.delimiter());
+    out.println("  columns:");
+    for (ImportReport.ColumnReport c : r.columns()) {
+      out.printf(
+          "    %-14s %s%s%n", roleLabel(c.role()), c.header(), c.detected() ? "" : "  (as named)");
+    }
+    out.printf(
+        "  %d rows read: %d answers added, %d rows already there (duplicates), %d rows skipped%n",
+        r.rows(), r.answers(), r.duplicates(), r.skipped());
+    if (r.codesCreated() > 0 || r.assignments() > 0) {
+      out.printf(
+          "  %d imported code assignments, %d new codes in the codebook%n",
+          r.assignments(), r.codesCreated());
+    }
+    if (!r.problems().isEmpty()) {
+      out.printf("  %d problems:%n", r.problems().size());
+      for (InputProblem p : r.problems()) {
+        out.println("    " + p);
+      }
+    }
+  }
+
+  static String roleLabel(ColumnRole role) {
+    return switch (role) {
+      case ID -> "respondent id";
+      case DATE -> "date";
+      case TEXT -> "question";
+      case META -> "segment";
+      case CODES -> "codes";
+      case CODER -> "coder";
+      case IGNORED -> "not kept";
+    };
+  }
+}

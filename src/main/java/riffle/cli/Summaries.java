@@ -1,0 +1,39 @@
+package riffle.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import riffle.model.ProjectSummary;
+import riffle.model.WaveSummary;
+
+/** Prints a project summary for people. */
+final class Summaries {
+  private Summaries() {}
+
+  static void print(PrintWriter out, Path project, ProjectSummary s) {
+    out.printf("Project %s%n", project);
+    out.printf(
+        "  %d waves, %d respondents, %d answers (%d substantive), %d codes, %d assignments%n",
+        s.waves().size(),
+        s.respondents(),
+        s.answers(),
+        s.substantive(),
+        s.codes(),
+        s.assignments());
+    if (!s.waves().isEmpty()) {
+      out.printf(
+          "  %-20s %-10s %11s %8s %12s%n",
+          "wave", "fielded", "respondents", "answers", "substantive");
+      for (WaveSummary w : s.waves()) {
+        out.printf(
+            "  %-20s %-10s %11d %8d %12d%n",
+            w.name(), w.fieldedOn(), w.respondents(), w.answers(), w.substantive());
+      }
+    }
+    if (!s.questions().isEmpty()) {
+      out.println("  questions:");
+      for (String q : s.questions()) {
+        out.println("    " + q);
+      }
+    }
+  }
+}

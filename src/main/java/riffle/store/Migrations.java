@@ -1,0 +1,65 @@
+package riffle.store;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * The forward migrations of the project schema. Migration {@code n} takes a project from schema
+ * {@code n-1} to {@code n}; its SQL lives in {@code V<n>__<name>.sql} beside this class.
+ */
+final class Migrations {
+  /** Resource names, in order; the list's size is the newest schema this program knows. */
+  private static final List<String> SCRIPTS = List.of("V1__project.sql");
+
+  private Migrations() {}
+
+  static int latest() {
+    return SCRIPTS.size();
+  }
+
+  /** Applies every migration after {@code from}, inside the caller's transaction. */
+  static void apply(Connection connection, int from) throws SQLException {
+    for (int version = from + 1; version <= SCRIPTS.size(); version++) {
+      try (Statement statement = connection.createStatement()) {
+        for (String sql : statements(read(SCRIPTS.get(version - 1)))) {
+          statement.executeUpdate(sql);
+        }
+        statement.executeUpdate("PRAGMA user_version = " + version);
+      }
+    }
+  }
+
+  /** Splits a script into statements, dropping {@code --} comments first. */
+  static List<String> statements(String script) {
+    StringBuilder code = new StringBuilder();
+    for (String line : script.split("\n", -1)) {
+      int comment = line.indexOf("--");
+      code.append(comment >= 0 ? line.substring(0, comment) : line).append('\n');
+    }
+    List<String> out = new ArrayList<>();
+    for (String part : code.toString().split(";")) {
+      if (!part.isBlank()) {
+        out.add(part.strip());
+      }
+    }
+    return out;
+  }
+
+  private static String read(String resource) {
+    try (InputStream in =
+        Objects.requireNonNull(
+            Migrations.class.getResourceAsStream("/riffle/store/" + resource), resource)) {
+      return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+  }
+}

@@ -1,0 +1,261 @@
+package riffle.store;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.LocalDate;
+import java.util.Optional;
+import java.util.Properties;
+import org.sqlite.SQLiteErrorCode;
+import org.sqlite.SQLiteException;
+import riffle.model.BatchOutcome;
+import riffle.model.Progress;
+import riffle.model.ProjectSummary;
+import riffle.model.WaveBatch;
+
+/**
+ * An open project file. Not thread-safe: one instance per thread (each holds its own connection);
+ * several instances, in one process or many, may share a file.
+ */
+public final class ProjectStore implements AutoCloseable {
+  /** Marks a SQLite file as a Riffle project ({@code PRAGMA application_id}). */
+  static final int APPLICATION_ID = 0x52664c31;
+
+  /** How long a writer waits for another process's write to finish. */
+  static final int BUSY_TIMEOUT_MS = 15_000;
+
+  private final Path file;
+  private final Connection connection;
+
+  private ProjectStore(Path file, Connection connection) {
+    this.file = file;
+    this.connection = connection;
+  }
+
+  /** Opens the project at {@code file}, creating it when there is none. */
+  public static ProjectStore openOrCreate(Path file) throws ProjectFileException {
+    Path parent = file.toAbsolutePath().getParent();
+    if (parent != null && !Files.isDirectory(parent)) {
+      throw new ProjectFileException(
+          "cannot create project " + file + ": folder " + parent + " does not exist");
+    }
+    return open(file);
+  }
+
+  /** Opens an existing project; refuses a missing file. */
+  public static ProjectStore openExisting(Path file) throws ProjectFileException {
+    if (!Files.isRegularFile(file)) {
+      throw new ProjectFileException(
+          "no project at "
+              + file
+              + "; create one with: riffle import --project "
+              + file
+              + " --file EXPORT.csv");
+    }
+    return open(file);
+  }
+
+  private static ProjectStore open(Path file) throws ProjectFileException {
+    Connection connection;
+    try {
+      connection = DriverManager.getConnection("jdbc:sqlite:" + file, settings());
+    } catch (SQLException e) {
+      throw new ProjectFileException("cannot open project " + file + ": " + e.getMessage(), e);
+    }
+    ProjectStore store = new ProjectStore(file, connection);
+    try {
+      store.prepareSchema();
+      return store;
+    } catch (ProjectFileException | RuntimeException e) {
+      store.close();
+      throw e;
+    }
+  }
+
+  private static Properties settings() {
+    Properties p = new Properties();
+    p.setProperty("journal_mode", "WAL");
+    p.setProperty("foreign_keys", "true");
+    p.setProperty("synchronous", "NORMAL");
+    p.setProperty("busy_timeout", Integer.toString(BUSY_TIMEOUT_MS));
+    return p;
+  }
+
+  /** The project file's path. */
+  public Path file() {
+    return file;
+  }
+
+  /** Checks what the file holds and migrates it forward when it is older than this program. */
+  private void prepareSchema() throws ProjectFileException {
+    write(
+        c -> {
+          int appId = pragmaInt(c, "application_id");
+          int version = pragmaInt(c, "user_version");
+          if (appId != APPLICATION_ID && (appId != 0 || version != 0 || hasTables(c))) {
+            throw new ProjectFileException(
+                file
+                    + " is not a Riffle project (it is another kind of database); pick a new name");
+          }
+          if (version > Migrations.latest()) {
+            throw new ProjectFileException(
+                file
+                    + " was written by a newer Riffle (project schema "
+                    + version
+                    + "; this Riffle reads schemas up to "
+                    + Migrations.latest()
+                    + "). Open it with a newer Riffle; the file was not changed.");
+          }
+          if (version < Migrations.latest()) {
+            try (Statement s = c.createStatement()) {
+              s.executeUpdate("PRAGMA application_id = " + APPLICATION_ID);
+            }
+            Migrations.apply(c, version);
+          }
+          return null;
+        });
+  }
+
+  private static boolean hasTables(Connection c) throws SQLException {
+    try (Statement s = c.createStatement();
+        ResultSet rs = s.executeQuery("SELECT count(*) FROM sqlite_schema")) {
+      return rs.next() && rs.getInt(1) > 0;
+    }
+  }
+
+  static int pragmaInt(Connection c, String pragma) throws SQLException {
+    try (Statement s = c.createStatement();
+        ResultSet rs = s.executeQuery("PRAGMA " + pragma)) {
+      return rs.next() ? rs.getInt(1) : 0;
+    }
+  }
+
+  /** The schema version of the open file. */
+  public int schemaVersion() throws ProjectFileException {
+    return read(c -> pragmaInt(c, "user_version"));
+  }
+
+  /** The newest schema version this program reads and writes. */
+  public static int latestSchemaVersion() {
+    return Migrations.latest();
+  }
+
+  /** The fielding date of a wave, when the wave exists. */
+  public Optional<LocalDate> waveDate(String wave) throws ProjectFileException {
+    return read(
+        c -> {
+          try (PreparedStatement ps =
+              c.prepareStatement("SELECT fielded_on FROM wave WHERE name = ?")) {
+            ps.setString(1, wave);
+            try (ResultSet rs = ps.executeQuery()) {
+              return rs.next() ? Optional.of(LocalDate.parse(rs.getString(1))) : Optional.empty();
+            }
+          }
+        });
+  }
+
+  /** How many waves the project holds. */
+  public int waveCount() throws ProjectFileException {
+    return read(c -> Summaries.count(c, "SELECT count(*) FROM wave"));
+  }
+
+  /** Stores one import in a single transaction: all of it, or (on any failure) nothing. */
+  public BatchOutcome store(WaveBatch batch, Progress progress) throws ProjectFileException {
+    return write(c -> new BatchWriter(c, progress).write(batch));
+  }
+
+  /** Counts for the whole project. */
+  public ProjectSummary summary() throws ProjectFileException {
+    return read(Summaries::summary);
+  }
+
+  /** Runs SQLite's integrity check; returns "ok" for a sound file. */
+  public String integrityCheck() throws ProjectFileException {
+    return read(
+        c -> {
+          try (Statement s = c.createStatement();
+              ResultSet rs = s.executeQuery("PRAGMA integrity_check")) {
+            return rs.next() ? rs.getString(1) : "no answer";
+          }
+        });
+  }
+
+  /** Work done on a connection. */
+  @FunctionalInterface
+  interface Work<T> {
+    T run(Connection connection) throws SQLException, ProjectFileException;
+  }
+
+  <T> T read(Work<T> work) throws ProjectFileException {
+    try {
+      return work.run(connection);
+    } catch (SQLException e) {
+      throw translate(e);
+    }
+  }
+
+  /** Runs {@code work} in a write transaction that holds SQLite's write lock from the start. */
+  <T> T write(Work<T> work) throws ProjectFileException {
+    try {
+      try (Statement s = connection.createStatement()) {
+        s.executeUpdate("BEGIN IMMEDIATE");
+      }
+      boolean committed = false;
+      try {
+        T result = work.run(connection);
+        try (Statement s = connection.createStatement()) {
+          s.executeUpdate("COMMIT");
+        }
+        committed = true;
+        return result;
+      } finally {
+        if (!committed) {
+          try (Statement s = connection.createStatement()) {
+            s.executeUpdate("ROLLBACK");
+          }
+        }
+      }
+    } catch (SQLException e) {
+      throw translate(e);
+    }
+  }
+
+  private ProjectFileException translate(SQLException e) {
+    if (e instanceof SQLiteException se) {
+      int code = se.getResultCode().code & 0xff; // primary code, without the extended bits
+      if (code == SQLiteErrorCode.SQLITE_BUSY.code || code == SQLiteErrorCode.SQLITE_LOCKED.code) {
+        return new ProjectFileException(
+            file
+                + " is busy: another Riffle process has been writing it for over "
+                + BUSY_TIMEOUT_MS / 1000
+                + " s. Try again when it has finished; nothing was changed.",
+            e);
+      }
+      if (code == SQLiteErrorCode.SQLITE_NOTADB.code) {
+        return new ProjectFileException(
+            file + " is not a Riffle project (not a database file); pick another name", e);
+      }
+      if (code == SQLiteErrorCode.SQLITE_READONLY.code
+          || code == SQLiteErrorCode.SQLITE_CANTOPEN.code) {
+        return new ProjectFileException(
+            "cannot write project " + file + ": check the file's permissions and free space", e);
+      }
+    }
+    return new ProjectFileException(
+        "project " + file + " could not be read or written: " + e.getMessage(), e);
+  }
+
+  @Override
+  public void close() {
+    try {
+      connection.close();
+    } catch (SQLException e) {
+      // Closing a connection that failed leaves nothing to clean up: SQLite keeps the file sound.
+    }
+  }
+}

@@ -1,0 +1,65 @@
+package riffle.store;
+
+import java.sql.Connection;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import riffle.model.ProjectSummary;
+import riffle.model.WaveSummary;
+
+/** Read-only counts over a project. */
+final class Summaries {
+  private Summaries() {}
+
+  static ProjectSummary summary(Connection c) throws SQLException {
+    List<WaveSummary> waves = new ArrayList<>();
+    try (Statement s = c.createStatement();
+        ResultSet rs =
+            s.executeQuery(
+                """
+                SELECT w.name, w.fielded_on,
+                       (SELECT count(*) FROM respondent r WHERE r.wave_id = w.id),
+                       count(a.id), coalesce(sum(a.substantive), 0)
+                FROM wave w
+                LEFT JOIN respondent r ON r.wave_id = w.id
+                LEFT JOIN answer a ON a.respondent_id = r.id
+                GROUP BY w.id
+                ORDER BY w.position
+                """)) {
+      while (rs.next()) {
+        waves.add(
+            new WaveSummary(
+                rs.getString(1),
+                LocalDate.parse(rs.getString(2)),
+                rs.getInt(3),
+                rs.getInt(4),
+                rs.getInt(5)));
+      }
+    }
+    List<String> questions = new ArrayList<>();
+    try (Statement s = c.createStatement();
+        ResultSet rs = s.executeQuery("SELECT text FROM question ORDER BY position")) {
+      while (rs.next()) {
+        questions.add(rs.getString(1));
+      }
+    }
+    return new ProjectSummary(
+        waves,
+        questions,
+        count(c, "SELECT count(*) FROM respondent"),
+        count(c, "SELECT count(*) FROM answer"),
+        count(c, "SELECT count(*) FROM answer WHERE substantive = 1"),
+        count(c, "SELECT count(*) FROM code"),
+        count(c, "SELECT count(*) FROM assignment"));
+  }
+
+  static int count(Connection c, String sql) throws SQLException {
+    try (Statement s = c.createStatement();
+        ResultSet rs = s.executeQuery(sql)) {
+      return rs.next() ? rs.getInt(1) : 0;
+    }
+  }
+}

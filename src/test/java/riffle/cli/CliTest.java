@@ -1,0 +1,257 @@
+package riffle.cli;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintStream;
+import java.net.URISyntaxException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/** The command line as a user meets it: real fixture files, exit codes, text and JSON. */
+class CliTest {
+  @TempDir Path dir;
+
+  /** What one run printed and returned. */
+  record Run(int code, String out, String err) {
+    JsonNode json() throws IOException {
+      return Json.MAPPER.readTree(out);
+    }
+  }
+
+  static Run riffle(String stdin, String... args) {
+    ByteArrayOutputStream out = new ByteArrayOutputStream();
+    ByteArrayOutputStream err = new ByteArrayOutputStream();
+    InputStream in = new ByteArrayInputStream(stdin.getBytes(StandardCharsets.UTF_8));
+    int code =
+        Main.run(
+            args,
+            in,
+            new PrintStream(out, true, StandardCharsets.UTF_8),
+            new PrintStream(err, true, StandardCharsets.UTF_8));
+    return new Run(
+        code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
+  }
+
+  static Run riffle(String... args) {
+    return riffle("", args);
+  }
+
+  static Path fixture(String name) {
+    try {
+      return Path.of(CliTest.class.getResource("/riffle/cli/" + name).toURI());
+    } catch (URISyntaxException e) {
+      throw new IllegalStateException(e);
+    }
+  }
+
+  String project() {
+    return dir.resolve("shop.riffle").toString();
+  }
+
+  @Test
+  void importsTwoQuestionsWithImportedCodes() throws IOException {
+    Run run =
+        riffle(
+            "import", "--project", project(), "--file", fixture("two-questions.csv").toString(),
+            "--wave", "Wave 1", "--date", "2026-03-15", "--json");
+    assertEquals(0, run.code(), run.err());
+    JsonNode json = run.json();
+    assertEquals("Wave 1", json.get("wave").asText());
+    assertEquals(8, json.get("rows").asInt());
+    assertEquals(16, json.get("answers").asInt());
+    assertEquals(0, json.get("skipped").asInt());
+    assertEquals(0, json.get("duplicates").asInt());
+    assertEquals(0, json.get("problems").size());
+    assertEquals(6, json.get("codes_created").asInt());
+    assertEquals(7, json.get("assignments").asInt());
+
+    JsonNode info = riffle("info", "--project", project(), "--json").json();
+    assertEquals(1, info.get("waves").size());
+    JsonNode wave = info.get("waves").get(0);
+    assertEquals("Wave 1", wave.get("name").asText());
+    assertEquals(16, wave.get("answers").asInt());
+    assertEquals(13, wave.get("substantive").asInt(), "n/a, nothing and - leave the base");
+    assertEquals(16, info.get("answers").asInt());
+    assertEquals(6, info.get("codes").asInt());
+    assertEquals(7, info.get("assignments").asInt());
+    assertEquals("2026-03-15", wave.get("fielded_on").asText());
+  }
+
+  @Test
+  void reimportingTheSameFileAddsNothing() throws IOException {
+    String file = fixture("two-questions.csv").toString();
+    assertEquals(0, riffle("import", "--project", project(), "--file", file, "--wave", "W").code());
+    JsonNode again =
+        riffle("import", "--project", project(), "--file", file, "--wave", "W", "--json").json();
+    assertEquals(8, again.get("duplicates").asInt());
+    assertEquals(0, again.get("answers").asInt());
+    assertEquals(0, again.get("assignments").asInt());
+    assertEquals(16, riffle("info", "--project", project(), "--json").json().get("answers").asInt());
+  }
+
+  @Test
+  void waveDefaultsToTheFileNameAndItsLatestAnswerDate() throws IOException {
+    JsonNode json =
+        riffle("import", "--project", project(), "--file", fixture("two-questions.csv").toString(),
+                "--json")
+            .json();
+    assertEquals("two-questions", json.get("wave").asText());
+    assertEquals("2026-03-09", json.get("fielded_on").asText());
+  }
+
+  @Test
+  void importsCellsPastedOnStandardInput() throws IOException {
+    String paste =
+        "id\tdevice\tWhat made you choose us?\n"
+            + "P1\tmobile\t\"the warranty,\nand the tested parts\"\n"
+            + "P2\tdesktop\tgood price for a machine that works like new\n"
+            + "P3\tmobile\tn/a\n";
+    Run run = riffle(paste, "import", "--project", project(), "--paste", "--json");
+    assertEquals(0, run.code(), run.err());
+    JsonNode json = run.json();
+    assertEquals("Wave 1", json.get("wave").asText());
+    assertEquals(3, json.get("rows").asInt());
+    assertEquals(3, json.get("answers").asInt());
+    assertEquals("tab", json.get("delimiter").asText());
+    JsonNode info = riffle("info", "--project", project(), "--json").json();
+    assertEquals(2, info.get("waves").get(0).get("substantive").asInt());
+  }
+
+  @Test
+  void raggedRowIsSkippedAndReportedWithItsLine() throws IOException {
+    Run run =
+        riffle("import", "--project", project(), "--file", fixture("ragged-row.csv").toString(),
+            "--json");
+    assertEquals(0, run.code(), run.err());
+    JsonNode json = run.json();
+    assertEquals(2, json.get("answers").asInt());
+    assertEquals(1, json.get("skipped").asInt());
+    assertEquals(3, json.get("problems").get(0).get("line").asInt());
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @CsvSource({
+    "unclosed-quote.csv, unclosed-quote.csv:3:3",
+    "empty.csv, empty",
+    "no-text.csv, --text-column",
+    "binary.csv, binary",
+  })
+  void unusableExportExitsTwoAndChangesNothing(String name, String expected) throws IOException {
+    String file = fixture("two-questions.csv").toString();
+    assertEquals(0, riffle("import", "--project", project(), "--file", file).code());
+    byte[] before = Files.readAllBytes(Path.of(project()));
+
+    Run run = riffle("import", "--project", project(), "--file", fixture(name).toString());
+    assertEquals(2, run.code(), run.out() + run.err());
+    assertTrue(run.err().contains(expected), run.err());
+    assertTrue(run.err().contains(name), "the message names the file: " + run.err());
+    assertFalse(run.err().contains("Exception"), "no stack trace or exception name: " + run.err());
+    assertArrayEquals(before, Files.readAllBytes(Path.of(project())));
+    assertEquals(16, riffle("info", "--project", project(), "--json").json().get("answers").asInt());
+  }
+
+  @Test
+  void unusableExportDoesNotCreateAProject() {
+    Run run =
+        riffle("import", "--project", project(), "--file", fixture("empty.csv").toString());
+    assertEquals(2, run.code());
+    assertFalse(Files.exists(Path.of(project())), "no empty project is left behind");
+  }
+
+  @Test
+  void errorsComeAsJsonWithTheirPositionWhenAsked() throws IOException {
+    Run run =
+        riffle("import", "--project", project(), "--file",
+            fixture("unclosed-quote.csv").toString(), "--json");
+    assertEquals(2, run.code());
+    JsonNode error = run.json().get("error");
+    assertEquals("unclosed-quote.csv", error.get("file").asText());
+    assertEquals(3, error.get("line").asInt());
+    assertEquals(3, error.get("column").asInt());
+  }
+
+  @ParameterizedTest(name = "{0}")
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "--encoding klingon-8|klingon-8",
+        "--delimiter colon|--delimiter",
+        "--date 15/03/2026|YYYY-MM-DD",
+        "--text-column Missing|Missing",
+        "--max-mb 0|",
+      })
+  void badOptionsExitTwoWithAMessage(String option, String expected) {
+    List<String> args =
+        new ArrayList<>(
+            List.of("import", "--project", project(), "--file",
+                fixture("two-questions.csv").toString()));
+    args.addAll(List.of(option.split(" ")));
+    Run run = riffle(args.toArray(String[]::new));
+    assertEquals(2, run.code(), run.err());
+    if (expected != null) {
+      assertTrue(run.err().contains(expected), run.err());
+    }
+    assertFalse(Files.exists(Path.of(project())));
+  }
+
+  @Test
+  void aWaveKeepsItsDate() {
+    String file = fixture("two-questions.csv").toString();
+    riffle("import", "--project", project(), "--file", file, "--wave", "W", "--date", "2026-03-15");
+    Run run =
+        riffle("import", "--project", project(), "--file", file, "--wave", "W", "--date",
+            "2026-04-01");
+    assertEquals(2, run.code());
+    assertTrue(run.err().contains("is dated 2026-03-15"), run.err());
+  }
+
+  @Test
+  void infoOnAMissingProjectSaysHowToCreateOne() {
+    Run run = riffle("info", "--project", project());
+    assertEquals(2, run.code());
+    assertTrue(run.err().contains("riffle import"), run.err());
+  }
+
+  @Test
+  void everyCommandHasHelp() {
+    for (String command : List.of("import", "info", "demo")) {
+      Run run = riffle(command, "--help");
+      assertEquals(0, run.code(), command);
+      assertTrue(run.out().contains("Usage: riffle " + command), run.out());
+    }
+    Run root = riffle("--help");
+    assertEquals(0, root.code());
+    assertTrue(root.out().contains("import"));
+  }
+
+  @Test
+  void unknownCommandIsAUsageError() {
+    Run run = riffle("serve-coffee");
+    assertEquals(2, run.code());
+  }
+
+  @Test
+  void infoPrintsWavesForPeople() {
+    riffle("import", "--project", project(), "--file", fixture("two-questions.csv").toString(),
+        "--wave", "Wave 1");
+    Run run = riffle("info", "--project", project());
+    assertEquals(0, run.code());
+    assertTrue(run.out().contains("Wave 1"), run.out());
+    assertTrue(run.out().contains("What made you choose us?"), run.out());
+  }
+}
