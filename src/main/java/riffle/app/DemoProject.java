@@ -13,8 +13,6 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
-import java.util.Optional;
-import riffle.ingest.ImportSettings;
 import riffle.ingest.UnreadableInputException;
 import riffle.model.Progress;
 import riffle.model.ProjectSummary;
@@ -72,12 +70,11 @@ public final class DemoProject {
       for (Entry e : entries) {
         imports.add(
             p.importWave(
-                new ImportRequest(
-                    new ImportSource.Bytes(e.file(), resource(e.file())),
-                    Optional.of(e.wave()),
-                    Optional.of(e.date()),
-                    ImportSettings.builder().get(),
-                    "demo"),
+                ImportRequest.from(new ImportSource.Bytes(e.file(), resource(e.file())))
+                    .wave(e.wave())
+                    .fieldedOn(e.date())
+                    .actor("demo")
+                    .get(),
                 progress));
       }
     } catch (UnreadableInputException e) {

@@ -2,10 +2,9 @@ package riffle.app;
 
 import java.nio.file.Path;
 import riffle.ingest.SurveyTable;
-import riffle.ingest.UnreadableInputException;
+import riffle.model.InputException;
 import riffle.model.Progress;
 import riffle.model.ProjectSummary;
-import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
 
 /** An open project and the use cases on it. Not thread-safe: one instance per thread. */
@@ -17,12 +16,12 @@ public final class Project implements AutoCloseable {
   }
 
   /** Opens the project at {@code file}, creating an empty one when there is none. */
-  public static Project openOrCreate(Path file) throws ProjectFileException {
+  public static Project openOrCreate(Path file) throws InputException {
     return new Project(ProjectStore.openOrCreate(file));
   }
 
   /** Opens an existing project, refusing a missing file. */
-  public static Project openExisting(Path file) throws ProjectFileException {
+  public static Project openExisting(Path file) throws InputException {
     return new Project(ProjectStore.openExisting(file));
   }
 
@@ -35,25 +34,23 @@ public final class Project implements AutoCloseable {
    * Imports an export as (part of) a wave. Either everything is stored or, when the input is
    * unusable or the project cannot be written, nothing is.
    *
-   * @throws UnreadableInputException when the export cannot be used; its problem names the file,
-   *     line and column
-   * @throws ProjectFileException when the project cannot be written
+   * @throws InputException when the export cannot be used (its problem names the file, line and
+   *     column) or the project cannot be written
    * @throws IllegalArgumentException when the request contradicts the project (a wave's date)
    */
-  public ImportReport importWave(ImportRequest request, Progress progress)
-      throws UnreadableInputException, ProjectFileException {
+  public ImportReport importWave(ImportRequest request, Progress progress) throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
     return new WaveImporter(store).store(request, table, progress);
   }
 
   /**
-   * Imports into the project at {@code file}, creating it when missing. The export is read in
-   * full first: an unusable export leaves no trace, not even a new empty project.
+   * Imports into the project at {@code file}, creating it when missing. The export is read in full
+   * first: an unusable export leaves no trace, not even a new empty project.
    *
    * @see #importWave
    */
   public static ImportReport importInto(Path file, ImportRequest request, Progress progress)
-      throws UnreadableInputException, ProjectFileException {
+      throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
     try (Project project = openOrCreate(file)) {
       return new WaveImporter(project.store).store(request, table, progress);
@@ -61,7 +58,7 @@ public final class Project implements AutoCloseable {
   }
 
   /** Counts of waves, answers, codes and assignments. */
-  public ProjectSummary summary() throws ProjectFileException {
+  public ProjectSummary summary() throws InputException {
     return store.summary();
   }
 

@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -19,8 +18,6 @@ import riffle.app.ImportReport;
 import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
 import riffle.app.Project;
-import riffle.ingest.Delimiter;
-import riffle.ingest.ImportSettings;
 import riffle.model.ColumnRole;
 import riffle.model.InputProblem;
 
@@ -131,35 +128,31 @@ final class ImportCommand implements Callable<Integer>, JsonCommand {
 
   @Override
   public Integer call() throws IOException {
-    ImportSettings.Builder settings =
-        ImportSettings.builder()
-            .delimiter(Delimiter.parse(delimiter).orElse(null))
-            .encoding(encoding)
-            .maxBytes(Math.multiplyExact(maxMb, 1024L * 1024L));
-    textColumns.forEach(settings::textColumn);
-    codesColumns.forEach(settings::codesColumn);
-    metaColumns.forEach(settings::metaColumn);
-    if (idColumn != null) {
-      settings.idColumn(idColumn);
-    }
-    if (dateColumn != null) {
-      settings.dateColumn(dateColumn);
-    }
-    if (coderColumn != null) {
-      settings.coderColumn(coderColumn);
-    }
     ImportSource source =
         input.paste
             ? new ImportSource.Paste(new String(main.in.readAllBytes(), StandardCharsets.UTF_8))
             : new ImportSource.File(input.file);
-    ImportRequest request =
-        new ImportRequest(
-            source,
-            Optional.ofNullable(wave),
-            Optional.ofNullable(date),
-            settings.get(),
-            Actor.current());
-    ImportReport report = Project.importInto(project, request, TerminalProgress.forStderr());
+    ImportRequest.Builder request =
+        ImportRequest.from(source)
+            .wave(wave)
+            .fieldedOn(date)
+            .actor(Actor.current())
+            .delimiter(delimiter)
+            .encoding(encoding)
+            .maxMegabytes(maxMb);
+    textColumns.forEach(request::textColumn);
+    codesColumns.forEach(request::codesColumn);
+    metaColumns.forEach(request::metaColumn);
+    if (idColumn != null) {
+      request.idColumn(idColumn);
+    }
+    if (dateColumn != null) {
+      request.dateColumn(dateColumn);
+    }
+    if (coderColumn != null) {
+      request.coderColumn(coderColumn);
+    }
+    ImportReport report = Project.importInto(project, request.get(), TerminalProgress.forStderr());
     PrintWriter out = spec.commandLine().getOut();
     if (json) {
       Json.print(out, report);

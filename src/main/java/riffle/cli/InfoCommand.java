@@ -8,8 +8,8 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import riffle.app.Project;
-import riffle.model.ProjectSummary;
 import riffle.model.InputException;
+import riffle.model.ProjectSummary;
 
 /** {@code riffle info}: what a project holds. */
 @Command(

@@ -4,9 +4,9 @@ import java.io.IOException;
 import java.util.Optional;
 
 /**
- * Input that cannot be used as given: an unreadable export, a missing or foreign project file,
- * a project written by a newer schema. The message says what is wrong and what to do; the
- * command line shows it and exits 2, the web layer answers 4xx.
+ * Input that cannot be used as given: an unreadable export, a missing or foreign project file, a
+ * project written by a newer schema. The message says what is wrong and what to do; the command
+ * line shows it and exits 2, the web layer answers 4xx.
  */
 public class InputException extends IOException {
   private static final long serialVersionUID = 1L;

@@ -65,7 +65,7 @@ public final class ProjectStore implements AutoCloseable {
     try {
       connection = DriverManager.getConnection("jdbc:sqlite:" + file, settings());
     } catch (SQLException e) {
-      throw new ProjectFileException("cannot open project " + file + ": " + e.getMessage(), e);
+      throw translate(file, e);
     }
     ProjectStore store = new ProjectStore(file, connection);
     try {
@@ -195,7 +195,7 @@ public final class ProjectStore implements AutoCloseable {
     try {
       return work.run(connection);
     } catch (SQLException e) {
-      throw translate(e);
+      throw translate(file, e);
     }
   }
 
@@ -221,11 +221,11 @@ public final class ProjectStore implements AutoCloseable {
         }
       }
     } catch (SQLException e) {
-      throw translate(e);
+      throw translate(file, e);
     }
   }
 
-  private ProjectFileException translate(SQLException e) {
+  private static ProjectFileException translate(Path file, SQLException e) {
     if (e instanceof SQLiteException se) {
       int code = se.getResultCode().code & 0xff; // primary code, without the extended bits
       if (code == SQLiteErrorCode.SQLITE_BUSY.code || code == SQLiteErrorCode.SQLITE_LOCKED.code) {

@@ -33,7 +33,7 @@ class CliTest {
     }
   }
 
-  static Run riffle(String stdin, String... args) {
+  static Run riffleWithInput(String stdin, String... args) {
     ByteArrayOutputStream out = new ByteArrayOutputStream();
     ByteArrayOutputStream err = new ByteArrayOutputStream();
     InputStream in = new ByteArrayInputStream(stdin.getBytes(StandardCharsets.UTF_8));
@@ -48,7 +48,7 @@ class CliTest {
   }
 
   static Run riffle(String... args) {
-    return riffle("", args);
+    return riffleWithInput("", args);
   }
 
   static Path fixture(String name) {
@@ -67,8 +67,16 @@ class CliTest {
   void importsTwoQuestionsWithImportedCodes() throws IOException {
     Run run =
         riffle(
-            "import", "--project", project(), "--file", fixture("two-questions.csv").toString(),
-            "--wave", "Wave 1", "--date", "2026-03-15", "--json");
+            "import",
+            "--project",
+            project(),
+            "--file",
+            fixture("two-questions.csv").toString(),
+            "--wave",
+            "Wave 1",
+            "--date",
+            "2026-03-15",
+            "--json");
     assertEquals(0, run.code(), run.err());
     JsonNode json = run.json();
     assertEquals("Wave 1", json.get("wave").asText());
@@ -101,13 +109,19 @@ class CliTest {
     assertEquals(8, again.get("duplicates").asInt());
     assertEquals(0, again.get("answers").asInt());
     assertEquals(0, again.get("assignments").asInt());
-    assertEquals(16, riffle("info", "--project", project(), "--json").json().get("answers").asInt());
+    assertEquals(
+        16, riffle("info", "--project", project(), "--json").json().get("answers").asInt());
   }
 
   @Test
   void waveDefaultsToTheFileNameAndItsLatestAnswerDate() throws IOException {
     JsonNode json =
-        riffle("import", "--project", project(), "--file", fixture("two-questions.csv").toString(),
+        riffle(
+                "import",
+                "--project",
+                project(),
+                "--file",
+                fixture("two-questions.csv").toString(),
                 "--json")
             .json();
     assertEquals("two-questions", json.get("wave").asText());
@@ -121,7 +135,7 @@ class CliTest {
             + "P1\tmobile\t\"the warranty,\nand the tested parts\"\n"
             + "P2\tdesktop\tgood price for a machine that works like new\n"
             + "P3\tmobile\tn/a\n";
-    Run run = riffle(paste, "import", "--project", project(), "--paste", "--json");
+    Run run = riffleWithInput(paste, "import", "--project", project(), "--paste", "--json");
     assertEquals(0, run.code(), run.err());
     JsonNode json = run.json();
     assertEquals("Wave 1", json.get("wave").asText());
@@ -135,7 +149,12 @@ class CliTest {
   @Test
   void raggedRowIsSkippedAndReportedWithItsLine() throws IOException {
     Run run =
-        riffle("import", "--project", project(), "--file", fixture("ragged-row.csv").toString(),
+        riffle(
+            "import",
+            "--project",
+            project(),
+            "--file",
+            fixture("ragged-row.csv").toString(),
             "--json");
     assertEquals(0, run.code(), run.err());
     JsonNode json = run.json();
@@ -162,13 +181,13 @@ class CliTest {
     assertTrue(run.err().contains(name), "the message names the file: " + run.err());
     assertFalse(run.err().contains("Exception"), "no stack trace or exception name: " + run.err());
     assertArrayEquals(before, Files.readAllBytes(Path.of(project())));
-    assertEquals(16, riffle("info", "--project", project(), "--json").json().get("answers").asInt());
+    assertEquals(
+        16, riffle("info", "--project", project(), "--json").json().get("answers").asInt());
   }
 
   @Test
   void unusableExportDoesNotCreateAProject() {
-    Run run =
-        riffle("import", "--project", project(), "--file", fixture("empty.csv").toString());
+    Run run = riffle("import", "--project", project(), "--file", fixture("empty.csv").toString());
     assertEquals(2, run.code());
     assertFalse(Files.exists(Path.of(project())), "no empty project is left behind");
   }
@@ -176,8 +195,13 @@ class CliTest {
   @Test
   void errorsComeAsJsonWithTheirPositionWhenAsked() throws IOException {
     Run run =
-        riffle("import", "--project", project(), "--file",
-            fixture("unclosed-quote.csv").toString(), "--json");
+        riffle(
+            "import",
+            "--project",
+            project(),
+            "--file",
+            fixture("unclosed-quote.csv").toString(),
+            "--json");
     assertEquals(2, run.code());
     JsonNode error = run.json().get("error");
     assertEquals("unclosed-quote.csv", error.get("file").asText());
@@ -190,7 +214,7 @@ class CliTest {
       delimiter = '|',
       value = {
         "--encoding klingon-8|klingon-8",
-        "--delimiter colon|--delimiter",
+        "--delimiter colon|unknown delimiter 'colon'",
         "--date 15/03/2026|YYYY-MM-DD",
         "--text-column Missing|Missing",
         "--max-mb 0|",
@@ -198,7 +222,11 @@ class CliTest {
   void badOptionsExitTwoWithAMessage(String option, String expected) {
     List<String> args =
         new ArrayList<>(
-            List.of("import", "--project", project(), "--file",
+            List.of(
+                "import",
+                "--project",
+                project(),
+                "--file",
                 fixture("two-questions.csv").toString()));
     args.addAll(List.of(option.split(" ")));
     Run run = riffle(args.toArray(String[]::new));
@@ -214,7 +242,15 @@ class CliTest {
     String file = fixture("two-questions.csv").toString();
     riffle("import", "--project", project(), "--file", file, "--wave", "W", "--date", "2026-03-15");
     Run run =
-        riffle("import", "--project", project(), "--file", file, "--wave", "W", "--date",
+        riffle(
+            "import",
+            "--project",
+            project(),
+            "--file",
+            file,
+            "--wave",
+            "W",
+            "--date",
             "2026-04-01");
     assertEquals(2, run.code());
     assertTrue(run.err().contains("is dated 2026-03-15"), run.err());
@@ -247,8 +283,14 @@ class CliTest {
 
   @Test
   void infoPrintsWavesForPeople() {
-    riffle("import", "--project", project(), "--file", fixture("two-questions.csv").toString(),
-        "--wave", "Wave 1");
+    riffle(
+        "import",
+        "--project",
+        project(),
+        "--file",
+        fixture("two-questions.csv").toString(),
+        "--wave",
+        "Wave 1");
     Run run = riffle("info", "--project", project());
     assertEquals(0, run.code());
     assertTrue(run.out().contains("Wave 1"), run.out());

@@ -22,8 +22,14 @@ class ConcurrentWritersTest {
     try (BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
       w.write("response_id,device,What almost stopped you from ordering?\n");
       for (int i = 0; i < rows; i++) {
-        w.write(prefix + i + "," + (i % 3 == 0 ? "mobile" : "desktop")
-            + ",\"not sure when it would arrive, answer number " + i + "\"\n");
+        w.write(
+            prefix
+                + i
+                + ","
+                + (i % 3 == 0 ? "mobile" : "desktop")
+                + ",\"not sure when it would arrive, answer number "
+                + i
+                + "\"\n");
       }
     }
     return file;
@@ -37,15 +43,32 @@ class ConcurrentWritersTest {
     Path java = Path.of(System.getProperty("java.home"), "bin", "java");
     Process child =
         new ProcessBuilder(
-                List.of(java.toString(), "-cp", System.getProperty("java.class.path"),
-                    Main.class.getName(), "import", "--project", project.toString(),
-                    "--file", a.toString(), "--wave", "A", "--json"))
+                List.of(
+                    java.toString(),
+                    "-cp",
+                    System.getProperty("java.class.path"),
+                    Main.class.getName(),
+                    "import",
+                    "--project",
+                    project.toString(),
+                    "--file",
+                    a.toString(),
+                    "--wave",
+                    "A",
+                    "--json"))
             .redirectErrorStream(true)
             .redirectOutput(dir.resolve("child.log").toFile())
             .start();
     CliTest.Run here =
-        CliTest.riffle("import", "--project", project.toString(), "--file", b.toString(),
-            "--wave", "B", "--json");
+        CliTest.riffle(
+            "import",
+            "--project",
+            project.toString(),
+            "--file",
+            b.toString(),
+            "--wave",
+            "B",
+            "--json");
     assertEquals(true, child.waitFor(120, TimeUnit.SECONDS), "the other process finished");
     assertEquals(0, child.exitValue(), Files.readString(dir.resolve("child.log")));
     assertEquals(0, here.code(), here.err());

@@ -82,10 +82,10 @@ class ProjectStoreTest {
     try (ProjectStore store = ProjectStore.openOrCreate(dir.resolve("p.riffle"))) {
       assertEquals(ProjectStore.latestSchemaVersion(), store.schemaVersion());
       assertEquals("wal", store.read(c -> pragmaText(c, "journal_mode")));
-      assertEquals(1, store.read(c -> ProjectStore.pragmaInt(c, "foreign_keys")));
-      assertEquals(
-          ProjectStore.APPLICATION_ID,
-          store.read(c -> ProjectStore.pragmaInt(c, "application_id")));
+      int foreignKeys = store.read(c -> ProjectStore.pragmaInt(c, "foreign_keys"));
+      assertEquals(1, foreignKeys);
+      int applicationId = store.read(c -> ProjectStore.pragmaInt(c, "application_id"));
+      assertEquals(ProjectStore.APPLICATION_ID, applicationId);
       assertEquals("ok", store.integrityCheck());
     }
   }

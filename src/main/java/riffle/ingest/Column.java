@@ -1,0 +1,33 @@
+package riffle.ingest;
+
+import java.util.Objects;
+import riffle.model.ColumnRole;
+
+/**
+ * One column of a survey export and the role it plays.
+ *
+ * @param index the 0-based position of the column in the export
+ * @param header the header name, trimmed; blank headers are called {@code Column N} and repeated
+ *     ones get a {@code " (2)"} suffix, so headers are unique within a table
+ * @param role what the column holds
+ * @param detected true when the role was detected, false when the analyst named the column
+ * @param answersColumn for a {@link ColumnRole#CODES} column, the index of the {@link
+ *     ColumnRole#TEXT} column whose answers its codes belong to; -1 for every other role
+ */
+public record Column(
+    int index, String header, ColumnRole role, boolean detected, int answersColumn) {
+  public Column {
+    if (index < 0) {
+      throw new IllegalArgumentException("index must be >= 0, got " + index);
+    }
+    Objects.requireNonNull(header, "header");
+    Objects.requireNonNull(role, "role");
+    if (role == ColumnRole.CODES ? answersColumn < 0 : answersColumn != -1) {
+      throw new IllegalArgumentException(
+          "answersColumn must point at a text column for CODES and be -1 otherwise, got "
+              + answersColumn
+              + " for "
+              + role);
+    }
+  }
+}

@@ -1,0 +1,295 @@
+package riffle.ingest;
+
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import riffle.model.ColumnRole;
+
+/**
+ * Gives every column a role: named columns get the role they were named for; the others are
+ * detected from their header and from a sample of the first {@value #SAMPLE} rows.
+ *
+ * <p>Naming any column for a role switches detection of that role off. Otherwise, in this order:
+ *
+ * <ol>
+ *   <li><b>CODER</b>: header with the word coder(s) or annotator, or "coded by".
+ *   <li><b>CODES</b>: header with the word code(s), tag(s), theme(s) or coding, such as "Q1 codes",
+ *       unless it also says discount, promo, coupon, voucher, postal, zip, country, product, order,
+ *       tracking or the like (a promo code is not a code of the answer).
+ *   <li><b>ID</b>, one column at most, the first of: a header such as id, respondent (id), response
+ *       (id), submission id, record id or {@code #} whose values are at least 90% single tokens; a
+ *       header ending in "id" whose values are unique single tokens; else the leftmost column of at
+ *       least 5 values that are unique single tokens, at least 90% containing a digit, not dates
+ *       and not under a score or rating header.
+ *   <li><b>DATE</b>, one column at most: the leftmost header with the word date, time, timestamp,
+ *       submitted, created, completed, started, finished, answered or when whose values are at
+ *       least half dates or date-times; else the leftmost column whose values are at least 80%
+ *       dates or date-times.
+ *   <li><b>IGNORED</b> when empty in the sample, or personal data: a header such as name, e-mail,
+ *       phone, mobile, address or IP, or at least half the values shaped like e-mail addresses.
+ *   <li><b>TEXT</b>: free text, measured on the answers that are not {@link NonAnswers}: at least
+ *       one, a mean length of at least {@value #TEXT_MEAN_LENGTH} characters and of at least
+ *       {@value #TEXT_MEAN_WORDS} words, at least half holding a space, and at least 60% distinct.
+ *   <li><b>META</b>: few distinct values, at most min(50, max(5, half the filled values)), with a
+ *       mean length of at most {@value #META_MEAN_LENGTH} characters: device, customer type, order
+ *       value band, country, plan.
+ *   <li><b>IGNORED</b> otherwise: many distinct short values, such as names, order numbers or free
+ *       numbers; they are not kept.
+ * </ol>
+ *
+ * <p>A CODES column belongs to the nearest TEXT column on its left, else to the first TEXT column.
+ */
+final class RoleDetector {
+  static final int SAMPLE = 500;
+  static final int TEXT_MEAN_LENGTH = 15;
+  static final int TEXT_MEAN_WORDS = 3;
+  static final int META_MEAN_LENGTH = 40;
+
+  private static final int MAX_LISTED = 30;
+
+  private RoleDetector() {}
+
+  /**
+   * Finds the columns the settings name.
+   *
+   * @param names the unique header names
+   * @param settings the import settings
+   * @param line the header's line, for messages
+   * @return the role of each named column, by index; null for columns not named
+   * @throws BadInput when a named column is not in the header
+   */
+  static ColumnRole[] named(String[] names, ImportSettings settings, long line) throws BadInput {
+    ColumnRole[] roles = new ColumnRole[names.length];
+    for (Map.Entry<String, List<String>> e : settings.namedColumns().entrySet()) {
+      ColumnRole role = roleOf(e.getKey());
+      for (String wanted : e.getValue()) {
+        int i = find(names, wanted);
+        if (i < 0) {
+          throw new BadInput(
+              line,
+              0,
+              "no column named '"
+                  + wanted
+                  + "' ("
+                  + e.getKey()
+                  + "); the header has: "
+                  + listed(names)
+                  + "; check the name, or the --delimiter option if this list looks wrong");
+        }
+        roles[i] = role;
+      }
+    }
+    return roles;
+  }
+
+  /**
+   * Gives every column its role.
+   *
+   * @param names the unique header names
+   * @param named the roles of named columns, null for the others
+   * @param sample the first rows kept
+   * @param line the header's line, for messages
+   * @throws BadInput when no column holds open text
+   */
+  static List<Column> detect(String[] names, ColumnRole[] named, List<SurveyRow> sample, long line)
+      throws BadInput {
+    int n = names.length;
+    ColumnRole[] roles = named.clone();
+    boolean[] detected = new boolean[n];
+    Set<ColumnRole> off = EnumSet.noneOf(ColumnRole.class);
+    for (ColumnRole r : named) {
+      if (r != null) {
+        off.add(r);
+      }
+    }
+    HeaderWords[] words = new HeaderWords[n];
+    ColumnProfile[] profiles = new ColumnProfile[n];
+    for (int i = 0; i < n; i++) {
+      words[i] = new HeaderWords(names[i]);
+      profiles[i] = new ColumnProfile(sample, i);
+      detected[i] = roles[i] == null;
+    }
+    for (int i = 0; i < n; i++) {
+      if (roles[i] != null) {
+        continue;
+      }
+      if (!off.contains(ColumnRole.CODER) && words[i].isCoder()) {
+        roles[i] = ColumnRole.CODER;
+      } else if (!off.contains(ColumnRole.CODES) && words[i].isCodes()) {
+        roles[i] = ColumnRole.CODES;
+      }
+    }
+    if (!off.contains(ColumnRole.ID)) {
+      pickId(names, words, profiles, roles);
+    }
+    if (!off.contains(ColumnRole.DATE)) {
+      pickDate(words, profiles, roles);
+    }
+    for (int i = 0; i < n; i++) {
+      if (roles[i] == null) {
+        roles[i] = byValues(words[i], profiles[i], off);
+      }
+    }
+    return columns(names, roles, detected, line);
+  }
+
+  private static void pickId(
+      String[] names, HeaderWords[] words, ColumnProfile[] p, ColumnRole[] roles) {
+    int best = -1;
+    int bestRank = Integer.MAX_VALUE;
+    for (int i = 0; i < roles.length; i++) {
+      if (roles[i] != null || p[i].filled == 0) {
+        continue;
+      }
+      int rank;
+      if ((words[i].isId() || names[i].equals("#")) && p[i].tokenShare >= 0.9) {
+        rank = 1;
+      } else if (words[i].endsWithId() && p[i].unique && p[i].tokenShare == 1) {
+        rank = 2;
+      } else if (p[i].filled >= 5
+          && p[i].unique
+          && p[i].tokenShare == 1
+          && p[i].digitShare >= 0.9
+          && p[i].dateShare < 0.5
+          && p[i].emailShare == 0
+          && !words[i].isMeasure()) {
+        rank = 3;
+      } else {
+        continue;
+      }
+      if (rank < bestRank) {
+        best = i;
+        bestRank = rank;
+      }
+    }
+    if (best >= 0) {
+      roles[best] = ColumnRole.ID;
+    }
+  }
+
+  private static void pickDate(HeaderWords[] words, ColumnProfile[] p, ColumnRole[] roles) {
+    int best = -1;
+    int bestRank = Integer.MAX_VALUE;
+    for (int i = 0; i < roles.length; i++) {
+      if (roles[i] != null || p[i].filled == 0) {
+        continue;
+      }
+      int rank;
+      if (words[i].isDate() && p[i].dateShare >= 0.5) {
+        rank = 1;
+      } else if (p[i].dateShare >= 0.8) {
+        rank = 2;
+      } else {
+        continue;
+      }
+      if (rank < bestRank) {
+        best = i;
+        bestRank = rank;
+      }
+    }
+    if (best >= 0) {
+      roles[best] = ColumnRole.DATE;
+    }
+  }
+
+  private static ColumnRole byValues(HeaderWords words, ColumnProfile p, Set<ColumnRole> off) {
+    if (p.filled == 0 || words.isPersonal() || p.emailShare >= 0.5) {
+      return ColumnRole.IGNORED;
+    }
+    boolean text =
+        p.substantive >= 1
+            && p.meanLength >= TEXT_MEAN_LENGTH
+            && p.meanWords >= TEXT_MEAN_WORDS
+            && p.spaceShare >= 0.5
+            && p.variety >= 0.6;
+    if (text) {
+      return off.contains(ColumnRole.TEXT) ? ColumnRole.IGNORED : ColumnRole.TEXT;
+    }
+    int metaLimit = Math.min(50, Math.max(5, p.filled / 2));
+    if (!off.contains(ColumnRole.META)
+        && p.distinct <= metaLimit
+        && p.meanFilledLength <= META_MEAN_LENGTH) {
+      return ColumnRole.META;
+    }
+    return ColumnRole.IGNORED;
+  }
+
+  private static List<Column> columns(
+      String[] names, ColumnRole[] roles, boolean[] detected, long line) throws BadInput {
+    int firstText = -1;
+    for (int i = 0; i < roles.length && firstText < 0; i++) {
+      if (roles[i] == ColumnRole.TEXT) {
+        firstText = i;
+      }
+    }
+    if (firstText < 0) {
+      throw new BadInput(
+          line,
+          0,
+          "no open-text column found; columns: " + listed(names) + "; name one with --text-column");
+    }
+    List<Column> columns = new ArrayList<>(roles.length);
+    int lastText = -1;
+    for (int i = 0; i < roles.length; i++) {
+      if (roles[i] == ColumnRole.TEXT) {
+        lastText = i;
+      }
+      int answers = roles[i] == ColumnRole.CODES ? (lastText >= 0 ? lastText : firstText) : -1;
+      columns.add(new Column(i, names[i], roles[i], detected[i], answers));
+    }
+    return columns;
+  }
+
+  /** Finds a header: exact match first, else the only one equal ignoring case and spacing. */
+  static int find(String[] names, String wanted) {
+    for (int i = 0; i < names.length; i++) {
+      if (names[i].equals(wanted)) {
+        return i;
+      }
+    }
+    String w = HeaderNames.collapse(wanted).toLowerCase(Locale.ROOT);
+    int found = -1;
+    for (int i = 0; i < names.length; i++) {
+      if (names[i].toLowerCase(Locale.ROOT).equals(w)) {
+        if (found >= 0) {
+          return -1;
+        }
+        found = i;
+      }
+    }
+    return found;
+  }
+
+  private static String listed(String[] names) {
+    StringBuilder sb = new StringBuilder();
+    for (int i = 0; i < names.length && i < MAX_LISTED; i++) {
+      sb.append(i == 0 ? "" : ", ").append('\'').append(names[i]).append('\'');
+    }
+    if (names.length > MAX_LISTED) {
+      sb.append(" and ").append(names.length - MAX_LISTED).append(" more");
+    }
+    return sb.toString();
+  }
+
+  private static ColumnRole roleOf(String option) {
+    switch (option) {
+      case ImportSettings.Builder.TEXT:
+        return ColumnRole.TEXT;
+      case ImportSettings.Builder.ID:
+        return ColumnRole.ID;
+      case ImportSettings.Builder.DATE:
+        return ColumnRole.DATE;
+      case ImportSettings.Builder.CODES:
+        return ColumnRole.CODES;
+      case ImportSettings.Builder.CODER:
+        return ColumnRole.CODER;
+      case ImportSettings.Builder.META:
+        return ColumnRole.META;
+      default:
+        throw new IllegalStateException("unknown option " + option);
+    }
+  }
+}

@@ -1,0 +1,243 @@
+package riffle.ingest;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import riffle.model.ColumnRole;
+
+/**
+ * Turns decoded text into a {@link SurveyTable}: delimiter, records, header, the ragged-row policy
+ * (see the package documentation) and column roles.
+ */
+final class TableParser {
+  /** Decoded input and how it was decoded. */
+  record Input(
+      String source,
+      String text,
+      String encoding,
+      boolean encodingDetected,
+      List<String> warnings,
+      boolean paste) {}
+
+  private TableParser() {}
+
+  static SurveyTable parse(Input in, ImportSettings settings) throws BadInput {
+    String text = in.text();
+    ProblemList problems = new ProblemList(in.source(), settings.maxProblems());
+    for (String w : in.warnings()) {
+      // Decoding warnings either concern replaced bytes (placed at the first replacement) or the
+      // byte-order mark, which is on line 1.
+      long line = w.indexOf('\uFFFD') >= 0 ? lineOf(text, text.indexOf('\uFFFD')) : 1;
+      problems.add(line, 0, w);
+    }
+    Delimiter excelHint = sepLine(text);
+    Delimiter delimiter;
+    boolean delimiterDetected = settings.delimiter().isEmpty();
+    if (settings.delimiter().isPresent()) {
+      delimiter = settings.delimiter().get();
+    } else if (excelHint != null) {
+      delimiter = excelHint;
+    } else {
+      delimiter = DelimiterSniffer.sniff(text, in.paste());
+    }
+    List<CsvRecords.Raw> records = CsvRecords.read(text, delimiter);
+    int h = excelHint != null ? 1 : 0;
+    while (h < records.size() && isBlank(records.get(h).cells())) {
+      h++;
+    }
+    if (h >= records.size()) {
+      throw new BadInput(in.paste() ? "the pasted text is empty" : "file is empty");
+    }
+    CsvRecords.Raw header = records.get(h);
+    int width = width(header.cells(), records, h);
+    String[] names = HeaderNames.of(header.cells(), width, header.line(), problems);
+    ColumnRole[] named = RoleDetector.named(names, settings, header.line());
+
+    List<SurveyRow> rows = new ArrayList<>(Math.max(16, records.size() - h - 1));
+    int ragged = 0;
+    int blank = 0;
+    int trailingBlank = 0;
+    for (int r = h + 1; r < records.size(); r++) {
+      CsvRecords.Raw rec = records.get(r);
+      String[] cells = rec.cells();
+      if (isBlank(cells)) {
+        blank++;
+        trailingBlank++;
+        continue;
+      }
+      trailingBlank = 0;
+      if (fits(cells, width, header.cells())) {
+        rows.add(new SurveyRow(r - h, rec.line(), List.of(fit(cells, width))));
+      } else {
+        ragged++;
+        problems.add(rec.line(), 0, raggedMessage(cells, width, rec.line()));
+      }
+    }
+    int kept = rows.size() + ragged;
+    if (kept == 0) {
+      throw new BadInput(header.line(), 0, "no answers below the header");
+    }
+    if (ragged * 2 > kept) {
+      throw new BadInput(
+          0,
+          0,
+          ragged
+              + " of "
+              + kept
+              + " rows have a different number of fields than the header, which has "
+              + width
+              + " with the delimiter "
+              + delimiter.label()
+              + (delimiterDetected ? " (detected)" : " (as given)")
+              + "; the delimiter is probably wrong: set it with --delimiter"
+              + " (comma, semicolon, tab or pipe)");
+    }
+    if (text.indexOf('"') >= 0) {
+      for (long[] q :
+          QuoteScanner.strayQuotes(text, delimiter.character(), settings.maxProblems())) {
+        problems.add(
+            q[0],
+            (int) q[1],
+            "the quote that opens this answer closes "
+                + (q[2] == q[0] ? "on the same line" : "on line " + q[2])
+                + " but more text follows it; if the answer took in the rows after it, put the"
+                + " quotes right in the file or re-export");
+      }
+    }
+    List<SurveyRow> sample = rows.subList(0, Math.min(rows.size(), RoleDetector.SAMPLE));
+    List<Column> columns = RoleDetector.detect(names, named, sample, header.line());
+    return new SurveyTable(
+        in.source(),
+        in.encoding(),
+        delimiter,
+        delimiterDetected,
+        in.encodingDetected(),
+        columns,
+        rows,
+        problems.list(),
+        ragged + blank - trailingBlank);
+  }
+
+  /**
+   * Returns the number of columns: the header's fields, less trailing blank header fields that hold
+   * no value in any record.
+   */
+  private static int width(String[] header, List<CsvRecords.Raw> records, int h) {
+    int named = header.length;
+    while (named > 0 && header[named - 1].isBlank()) {
+      named--;
+    }
+    int used = named;
+    for (int r = h + 1; r < records.size() && used < header.length; r++) {
+      String[] cells = records.get(r).cells();
+      for (int i = Math.min(cells.length, header.length) - 1; i >= used; i--) {
+        if (!cells[i].isBlank()) {
+          used = i + 1;
+          break;
+        }
+      }
+    }
+    return used;
+  }
+
+  /**
+   * A record fits when it has every field up to the last named header and nothing but blanks after
+   * the last column; missing fields under blank headers are taken as empty.
+   */
+  private static boolean fits(String[] cells, int width, String[] header) {
+    int named = Math.min(width, header.length);
+    while (named > 0 && header[named - 1].isBlank()) {
+      named--;
+    }
+    if (cells.length < named) {
+      return false;
+    }
+    for (int i = width; i < cells.length; i++) {
+      if (!cells[i].isBlank()) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  private static String[] fit(String[] cells, int width) {
+    if (cells.length == width) {
+      return cells;
+    }
+    String[] fitted = Arrays.copyOf(cells, width);
+    for (int i = cells.length; i < width; i++) {
+      fitted[i] = "";
+    }
+    return fitted;
+  }
+
+  private static String raggedMessage(String[] cells, int width, long line) {
+    String message =
+        "row has "
+            + cells.length
+            + (cells.length == 1 ? " field" : " fields")
+            + ", the header has "
+            + width
+            + "; the row was skipped — usually a line break inside an answer that is not in quotes";
+    long breaks = 0;
+    for (String c : cells) {
+      breaks += lineBreaks(c);
+    }
+    if (breaks > 0) {
+      message +=
+          " (this row runs over lines "
+              + line
+              + "–"
+              + (line + breaks)
+              + ", so a quote in it may be misplaced)";
+    }
+    return message;
+  }
+
+  /** Recognises Excel's {@code sep=;} first line and returns the delimiter it names. */
+  static Delimiter sepLine(String text) {
+    int start = text.startsWith("\"") ? 1 : 0;
+    if (!text.regionMatches(true, start, "sep=", 0, 4) || text.length() < start + 5) {
+      return null;
+    }
+    int end = start + 5;
+    if (start == 1) {
+      if (text.length() <= end || text.charAt(end) != '"') {
+        return null;
+      }
+      end++;
+    }
+    if (end < text.length() && text.charAt(end) != '\n' && text.charAt(end) != '\r') {
+      return null;
+    }
+    return Delimiter.of(text.charAt(start + 4)).orElse(null);
+  }
+
+  private static boolean isBlank(String[] cells) {
+    for (String c : cells) {
+      if (!c.isBlank()) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  private static long lineBreaks(String s) {
+    long n = 0;
+    for (int i = 0; i < s.length(); i++) {
+      char c = s.charAt(i);
+      if (c == '\n' || (c == '\r' && (i + 1 == s.length() || s.charAt(i + 1) != '\n'))) {
+        n++;
+      }
+    }
+    return n;
+  }
+
+  /** Returns the 1-based line of a character offset, or 0 for a negative offset. */
+  static long lineOf(String text, int offset) {
+    if (offset < 0) {
+      return 0;
+    }
+    return 1 + lineBreaks(text.substring(0, offset));
+  }
+}
