@@ -11,6 +11,7 @@ import java.security.NoSuchAlgorithmException;
 import java.text.Normalizer;
 import java.time.DateTimeException;
 import java.time.LocalDate;
+import java.time.ZoneId;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
@@ -66,7 +67,9 @@ final class WaveImporter {
               + "; leave out --date to add to it, or name a new wave");
     }
     LocalDate date =
-        stored.or(request::fieldedOn).orElseGet(() -> latestDate(table).orElse(LocalDate.now()));
+        stored
+            .or(request::fieldedOn)
+            .orElseGet(() -> latestDate(table).orElse(LocalDate.now(ZoneId.systemDefault())));
 
     List<Column> texts = table.columnsWith(ColumnRole.TEXT);
     List<String> questions = texts.stream().map(Column::header).toList();

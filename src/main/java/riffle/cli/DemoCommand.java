@@ -3,6 +3,7 @@ package riffle.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -50,12 +51,17 @@ final class DemoCommand implements Callable<Integer>, JsonCommand {
     } else {
       for (ImportReport r : result.imports()) {
         out.printf(
+            Locale.ROOT,
             "Imported %s as \"%s\": %d rows, %d answers, %d problems%n",
-            r.source(), r.wave(), r.rows(), r.answers(), r.problems().size());
+            r.source(),
+            r.wave(),
+            r.rows(),
+            r.answers(),
+            r.problems().size());
       }
     }
     Summaries.print(out, result.project(), result.summary());
-    out.printf("%nNext: riffle info --project %s%n", result.project());
+    out.printf(Locale.ROOT, "%nNext: riffle info --project %s%n", result.project());
     return 0;
   }
 }

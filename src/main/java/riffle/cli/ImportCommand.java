@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -164,23 +165,37 @@ final class ImportCommand implements Callable<Integer>, JsonCommand {
 
   private static void print(PrintWriter out, ImportReport r) {
     out.printf(
-        "Imported into wave \"%s\" (fielded %s) from %s%n", r.wave(), r.fieldedOn(), r.source());
-    out.printf("  read as %s, %s-separated%n", r.encoding(), r.delimiter());
+        Locale.ROOT,
+        "Imported into wave \"%s\" (fielded %s) from %s%n",
+        r.wave(),
+        r.fieldedOn(),
+        r.source());
+    out.printf(Locale.ROOT, "  read as %s, %s-separated%n", r.encoding(), r.delimiter());
     out.println("  columns:");
     for (ImportReport.ColumnReport c : r.columns()) {
       out.printf(
-          "    %-14s %s%s%n", roleLabel(c.role()), c.header(), c.detected() ? "" : "  (as named)");
+          Locale.ROOT,
+          "    %-14s %s%s%n",
+          roleLabel(c.role()),
+          c.header(),
+          c.detected() ? "" : "  (as named)");
     }
     out.printf(
+        Locale.ROOT,
         "  %d rows read: %d answers added, %d rows already there (duplicates), %d rows skipped%n",
-        r.rows(), r.answers(), r.duplicates(), r.skipped());
+        r.rows(),
+        r.answers(),
+        r.duplicates(),
+        r.skipped());
     if (r.codesCreated() > 0 || r.assignments() > 0) {
       out.printf(
+          Locale.ROOT,
           "  %d imported code assignments, %d new codes in the codebook%n",
-          r.assignments(), r.codesCreated());
+          r.assignments(),
+          r.codesCreated());
     }
     if (!r.problems().isEmpty()) {
-      out.printf("  %d problems:%n", r.problems().size());
+      out.printf(Locale.ROOT, "  %d problems:%n", r.problems().size());
       for (InputProblem p : r.problems()) {
         out.println("    " + p);
       }

@@ -2,6 +2,7 @@ package riffle.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Locale;
 import riffle.model.ProjectSummary;
 import riffle.model.WaveSummary;
 
@@ -10,8 +11,9 @@ final class Summaries {
   private Summaries() {}
 
   static void print(PrintWriter out, Path project, ProjectSummary s) {
-    out.printf("Project %s%n", project);
+    out.printf(Locale.ROOT, "Project %s%n", project);
     out.printf(
+        Locale.ROOT,
         "  %d waves, %d respondents, %d answers (%d substantive), %d codes, %d assignments%n",
         s.waves().size(),
         s.respondents(),
@@ -21,12 +23,22 @@ final class Summaries {
         s.assignments());
     if (!s.waves().isEmpty()) {
       out.printf(
+          Locale.ROOT,
           "  %-20s %-10s %11s %8s %12s%n",
-          "wave", "fielded", "respondents", "answers", "substantive");
+          "wave",
+          "fielded",
+          "respondents",
+          "answers",
+          "substantive");
       for (WaveSummary w : s.waves()) {
         out.printf(
+            Locale.ROOT,
             "  %-20s %-10s %11d %8d %12d%n",
-            w.name(), w.fieldedOn(), w.respondents(), w.answers(), w.substantive());
+            w.name(),
+            w.fieldedOn(),
+            w.respondents(),
+            w.answers(),
+            w.substantive());
       }
     }
     if (!s.questions().isEmpty()) {
