@@ -14,7 +14,7 @@ import riffle.model.InputProblem;
  * @param encoding the encoding the export was read with
  * @param delimiter the delimiter's label
  * @param columns each column with its role
- * @param rows data rows read
+ * @param rows data rows read, skipped ones included
  * @param answers answers added
  * @param skipped rows left out (ragged or blank)
  * @param duplicates rows already in the wave with the same answers, which added nothing

@@ -82,7 +82,7 @@ final class WaveImporter {
             sha256(request),
             table.encoding(),
             table.delimiter().label(),
-            table.rows().size(),
+            table.rows().size() + table.skippedRows(),
             table.skippedRows(),
             questions,
             respondents,
@@ -99,7 +99,7 @@ final class WaveImporter {
         table.columns().stream()
             .map(c -> new ImportReport.ColumnReport(c.header(), c.role(), c.detected()))
             .toList(),
-        table.rows().size(),
+        table.rows().size() + table.skippedRows(),
         outcome.answersAdded(),
         table.skippedRows(),
         outcome.duplicateRows(),

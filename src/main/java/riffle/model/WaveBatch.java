@@ -13,7 +13,7 @@ import java.util.Objects;
  * @param sha256 hex digest of the input's bytes
  * @param encoding the encoding the input was read with
  * @param delimiter the delimiter's label
- * @param rows data rows read
+ * @param rows data rows read, skipped ones included
  * @param skipped rows left out (ragged or blank)
  * @param questions the open-text questions, in column order
  * @param respondents the rows, one respondent each

@@ -158,31 +158,75 @@ class CliTest {
             "--json");
     assertEquals(0, run.code(), run.err());
     JsonNode json = run.json();
+    assertEquals(3, json.get("rows").asInt());
     assertEquals(2, json.get("answers").asInt());
     assertEquals(1, json.get("skipped").asInt());
     assertEquals(3, json.get("problems").get(0).get("line").asInt());
   }
 
-  @ParameterizedTest(name = "{0}")
-  @CsvSource({
-    "unclosed-quote.csv, unclosed-quote.csv:3:3",
-    "empty.csv, empty",
-    "no-text.csv, --text-column",
-    "binary.csv, binary",
-  })
-  void unusableExportExitsTwoAndChangesNothing(String name, String expected) throws IOException {
+  @ParameterizedTest(name = "{0} {1}")
+  @CsvSource(
+      delimiter = '|',
+      value = {
+        "unclosed-quote.csv||unclosed-quote.csv:3:3",
+        "empty.csv||empty",
+        "no-text.csv||--text-column",
+        "binary.csv||binary",
+        "two-questions.csv|--encoding klingon-8|unknown encoding 'klingon-8'",
+        "two-questions.csv|--text-column Missing|two-questions.csv:1",
+      })
+  void unusableExportExitsTwoAndChangesNothing(String name, String extra, String expected)
+      throws IOException {
     String file = fixture("two-questions.csv").toString();
     assertEquals(0, riffle("import", "--project", project(), "--file", file).code());
     byte[] before = Files.readAllBytes(Path.of(project()));
 
-    Run run = riffle("import", "--project", project(), "--file", fixture(name).toString());
+    List<String> args =
+        new ArrayList<>(
+            List.of("import", "--project", project(), "--file", fixture(name).toString()));
+    if (extra != null) {
+      args.addAll(List.of(extra.split(" ")));
+    }
+    Run run = riffle(args.toArray(String[]::new));
     assertEquals(2, run.code(), run.out() + run.err());
     assertTrue(run.err().contains(expected), run.err());
-    assertTrue(run.err().contains(name), "the message names the file: " + run.err());
     assertFalse(run.err().contains("Exception"), "no stack trace or exception name: " + run.err());
     assertArrayEquals(before, Files.readAllBytes(Path.of(project())));
     assertEquals(
         16, riffle("info", "--project", project(), "--json").json().get("answers").asInt());
+  }
+
+  @Test
+  void exportOverTheSizeLimitIsRefusedUnread() throws IOException {
+    Path big = dir.resolve("big-export.csv");
+    StringBuilder sb = new StringBuilder("id,What made you choose us?\n");
+    for (int i = 0; sb.length() < 1_200_000; i++) {
+      sb.append(i).append(",\"the warranty and the tested parts, answer ").append(i).append("\"\n");
+    }
+    Files.writeString(big, sb, StandardCharsets.UTF_8);
+    Run run = riffle("import", "--project", project(), "--file", big.toString(), "--max-mb", "1");
+    assertEquals(2, run.code(), run.err());
+    assertTrue(run.err().contains("big-export.csv"), run.err());
+    assertTrue(run.err().contains("--max-mb"), "says how to raise the limit: " + run.err());
+    assertFalse(Files.exists(Path.of(project())));
+    assertEquals(0, riffle("import", "--project", project(), "--file", big.toString()).code());
+  }
+
+  @Test
+  void projectFromANewerRiffleIsRefused() throws Exception {
+    riffle("import", "--project", project(), "--file", fixture("two-questions.csv").toString());
+    try (java.sql.Connection c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + project());
+        java.sql.Statement s = c.createStatement()) {
+      s.executeUpdate("PRAGMA user_version = 99");
+    }
+    byte[] before = Files.readAllBytes(Path.of(project()));
+    Run info = riffle("info", "--project", project());
+    assertEquals(2, info.code());
+    assertTrue(info.err().contains("newer Riffle"), info.err());
+    Run load =
+        riffle("import", "--project", project(), "--file", fixture("ragged-row.csv").toString());
+    assertEquals(2, load.code());
+    assertArrayEquals(before, Files.readAllBytes(Path.of(project())));
   }
 
   @Test
@@ -213,10 +257,8 @@ class CliTest {
   @CsvSource(
       delimiter = '|',
       value = {
-        "--encoding klingon-8|klingon-8",
         "--delimiter colon|unknown delimiter 'colon'",
         "--date 15/03/2026|YYYY-MM-DD",
-        "--text-column Missing|Missing",
         "--max-mb 0|",
       })
   void badOptionsExitTwoWithAMessage(String option, String expected) {
