@@ -6,6 +6,7 @@ import java.nio.file.Path;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -29,12 +30,11 @@ final class DemoCommand implements Callable<Integer>, JsonCommand {
       description = "Working folder (default: ~/.riffle/demo).")
   Path dir;
 
-  @Option(names = "--json", description = "Print one JSON document instead of text.")
-  boolean json;
+  @Mixin JsonOption json;
 
   @Override
   public boolean json() {
-    return json;
+    return json.enabled;
   }
 
   @Override
@@ -42,7 +42,7 @@ final class DemoCommand implements Callable<Integer>, JsonCommand {
     Path folder = dir != null ? dir : Path.of(System.getProperty("user.home"), ".riffle", "demo");
     DemoProject.Result result = DemoProject.prepare(folder, TerminalProgress.forStderr());
     PrintWriter out = spec.commandLine().getOut();
-    if (json) {
+    if (json.enabled) {
       Json.print(out, result);
       return 0;
     }

@@ -11,6 +11,7 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
@@ -119,12 +120,11 @@ final class ImportCommand implements Callable<Integer>, JsonCommand {
       description = "Refuse exports larger than N MiB (default: ${DEFAULT-VALUE}).")
   long maxMb;
 
-  @Option(names = "--json", description = "Print one JSON document instead of text.")
-  boolean json;
+  @Mixin JsonOption json;
 
   @Override
   public boolean json() {
-    return json;
+    return json.enabled;
   }
 
   @Override
@@ -155,7 +155,7 @@ final class ImportCommand implements Callable<Integer>, JsonCommand {
     }
     ImportReport report = Project.importInto(project, request.get(), TerminalProgress.forStderr());
     PrintWriter out = spec.commandLine().getOut();
-    if (json) {
+    if (json.enabled) {
       Json.print(out, report);
     } else {
       print(out, report);

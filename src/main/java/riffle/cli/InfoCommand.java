@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -22,12 +23,11 @@ final class InfoCommand implements Callable<Integer>, JsonCommand {
   @Option(names = "--project", required = true, paramLabel = "P", description = "Project file.")
   Path project;
 
-  @Option(names = "--json", description = "Print one JSON document instead of text.")
-  boolean json;
+  @Mixin JsonOption json;
 
   @Override
   public boolean json() {
-    return json;
+    return json.enabled;
   }
 
   @Override
@@ -37,7 +37,7 @@ final class InfoCommand implements Callable<Integer>, JsonCommand {
       summary = p.summary();
     }
     PrintWriter out = spec.commandLine().getOut();
-    if (json) {
+    if (json.enabled) {
       Json.print(out, summary);
     } else {
       Summaries.print(out, project, summary);

@@ -180,42 +180,25 @@ final class BatchWriter {
   }
 
   private long waveId(WaveBatch batch) throws SQLException {
-    try (PreparedStatement ps = c.prepareStatement("SELECT id FROM wave WHERE name = ?")) {
-      ps.setString(1, batch.wave());
-      try (ResultSet rs = ps.executeQuery()) {
-        if (rs.next()) {
-          return rs.getLong(1);
-        }
-      }
-    }
-    try (PreparedStatement ps =
-        c.prepareStatement(
+    long id = find("SELECT id FROM wave WHERE name = ?", batch.wave());
+    return id >= 0
+        ? id
+        : insert(
             "INSERT INTO wave (name, fielded_on, position, created_at)"
-                + " VALUES (?, ?, (SELECT coalesce(max(position), 0) + 1 FROM wave), ?)"
-                + " RETURNING id")) {
-      ps.setString(1, batch.wave());
-      ps.setString(2, batch.fieldedOn().toString());
-      ps.setString(3, now);
-      return singleLong(ps);
-    }
+                + " VALUES (?, ?, (SELECT coalesce(max(position), 0) + 1 FROM wave), ?)",
+            batch.wave(),
+            batch.fieldedOn().toString(),
+            now);
   }
 
   private long questionId(String text) throws SQLException {
-    try (PreparedStatement ps = c.prepareStatement("SELECT id FROM question WHERE text = ?")) {
-      ps.setString(1, text);
-      try (ResultSet rs = ps.executeQuery()) {
-        if (rs.next()) {
-          return rs.getLong(1);
-        }
-      }
-    }
-    try (PreparedStatement ps =
-        c.prepareStatement(
+    long id = find("SELECT id FROM question WHERE text = ?", text);
+    return id >= 0
+        ? id
+        : insert(
             "INSERT INTO question (text, position)"
-                + " VALUES (?, (SELECT coalesce(max(position), 0) + 1 FROM question)) RETURNING id")) {
-      ps.setString(1, text);
-      return singleLong(ps);
-    }
+                + " VALUES (?, (SELECT coalesce(max(position), 0) + 1 FROM question))",
+            text);
   }
 
   /** Finds a code by name, ignoring case, or adds it to the codebook marked as imported. */
@@ -225,27 +208,38 @@ final class BatchWriter {
     if (known != null) {
       return known;
     }
-    long id;
-    try (PreparedStatement ps = c.prepareStatement("SELECT id FROM code WHERE name = ?")) {
-      ps.setString(1, name);
-      try (ResultSet rs = ps.executeQuery()) {
-        id = rs.next() ? rs.getLong(1) : -1;
-      }
-    }
+    long id = find("SELECT id FROM code WHERE name = ?", name);
     if (id < 0) {
-      try (PreparedStatement ps =
-          c.prepareStatement(
+      id =
+          insert(
               "INSERT INTO code (name, position, origin, created_at)"
-                  + " VALUES (?, (SELECT coalesce(max(position), 0) + 1 FROM code), 'imported', ?)"
-                  + " RETURNING id")) {
-        ps.setString(1, name);
-        ps.setString(2, now);
-        id = singleLong(ps);
-      }
+                  + " VALUES (?, (SELECT coalesce(max(position), 0) + 1 FROM code), 'imported', ?)",
+              name,
+              now);
       codesCreated++;
     }
     codeIds.put(key, id);
     return id;
+  }
+
+  /** The id a one-parameter query finds, or -1. */
+  private long find(String sql, String value) throws SQLException {
+    try (PreparedStatement ps = c.prepareStatement(sql)) {
+      ps.setString(1, value);
+      try (ResultSet rs = ps.executeQuery()) {
+        return rs.next() ? rs.getLong(1) : -1;
+      }
+    }
+  }
+
+  /** Runs an INSERT of string values and returns the new row's id. */
+  private long insert(String sql, String... values) throws SQLException {
+    try (PreparedStatement ps = c.prepareStatement(sql + " RETURNING id")) {
+      for (int i = 0; i < values.length; i++) {
+        ps.setString(i + 1, values[i]);
+      }
+      return singleLong(ps);
+    }
   }
 
   private long insertBatch(long waveId, WaveBatch batch) throws SQLException {
