@@ -1,11 +1,18 @@
 package riffle.app;
 
 import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
 import riffle.ingest.SurveyTable;
+import riffle.model.Analysis;
 import riffle.model.InputException;
 import riffle.model.Progress;
 import riffle.model.ProjectSummary;
+import riffle.model.Sentence;
+import riffle.store.AnalysisCache;
 import riffle.store.ProjectStore;
+import riffle.text.AnalysisCodec;
+import riffle.text.TextAnalyzer;
 
 /** An open project and the use cases on it. Not thread-safe: one instance per thread. */
 public final class Project implements AutoCloseable {
@@ -55,6 +62,49 @@ public final class Project implements AutoCloseable {
     try (Project project = openOrCreate(file)) {
       return new WaveImporter(project.store).store(request, table, progress);
     }
+  }
+
+  /**
+   * An answer's analysis: masks and language from the project file, sentences from the derived
+   * cache — analysed afresh (and cached again) when the cache lacks it, is stale or damaged.
+   */
+  public Optional<Analysis> analysis(long answerId) throws InputException {
+    Optional<ProjectStore.StoredAnalysis> stored = store.storedAnalysis(answerId);
+    if (stored.isEmpty()) {
+      return Optional.empty();
+    }
+    if (stored.get().masked() == null
+        || !AnalysisCodec.VERSION.equals(stored.get().analysedWith())) {
+      Analyses.refresh(store, Progress.NONE);
+      stored = store.storedAnalysis(answerId);
+    }
+    ProjectStore.StoredAnalysis s = stored.orElseThrow();
+    try (AnalysisCache cache = AnalysisCache.open(store.file())) {
+      Optional<List<Sentence>> sentences =
+          cache
+              .get(answerId, AnalysisCodec.VERSION)
+              .flatMap(bytes -> AnalysisCodec.decode(s.masked(), bytes));
+      if (sentences.isEmpty()) {
+        Analysis fresh = Analyses.analyzer().analyze(s.normalized());
+        cache.putAll(
+            List.of(new AnalysisCache.Entry(answerId, AnalysisCodec.encode(fresh.sentences()))),
+            AnalysisCodec.VERSION);
+        sentences = Optional.of(fresh.sentences());
+      }
+      return Optional.of(
+          new Analysis(
+              s.language(),
+              s.foreign(),
+              s.masked(),
+              s.pii(),
+              sentences.get(),
+              !s.foreign() && TextAnalyzer.truncates(s.masked())));
+    }
+  }
+
+  /** Every answer's id, in the order stored. */
+  public List<Long> answerIds() throws InputException {
+    return store.answerIds();
   }
 
   /** Counts of waves, answers, codes and assignments. */

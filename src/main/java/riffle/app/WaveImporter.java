@@ -14,6 +14,7 @@ import java.time.LocalDate;
 import java.time.ZoneId;
 import java.util.ArrayList;
 import java.util.HexFormat;
+import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -25,6 +26,7 @@ import riffle.ingest.SurveyReader;
 import riffle.ingest.SurveyRow;
 import riffle.ingest.SurveyTable;
 import riffle.ingest.UnreadableInputException;
+import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.ColumnRole;
 import riffle.model.InputProblem;
@@ -34,6 +36,7 @@ import riffle.model.Progress;
 import riffle.model.WaveBatch;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
+import riffle.text.AnalysisCodec;
 
 /** Reads an export and stores it as (part of) a wave, all in one transaction. */
 final class WaveImporter {
@@ -73,7 +76,7 @@ final class WaveImporter {
 
     List<Column> texts = table.columnsWith(ColumnRole.TEXT);
     List<String> questions = texts.stream().map(Column::header).toList();
-    List<NewRespondent> respondents = respondents(table, texts);
+    List<NewRespondent> respondents = respondents(table, texts, store.storedTexts(wave), progress);
     WaveBatch batch =
         new WaveBatch(
             wave,
@@ -86,8 +89,11 @@ final class WaveImporter {
             table.skippedRows(),
             questions,
             respondents,
-            request.actor());
+            request.actor(),
+            AnalysisCodec.VERSION);
     BatchOutcome outcome = store.store(batch, progress);
+    Analyses.cache(store.file(), outcome.added());
+    Analyses.refresh(store, progress);
     List<InputProblem> problems = new ArrayList<>(table.problems());
     problems.addAll(outcome.problems());
     return new ImportReport(
@@ -142,18 +148,37 @@ final class WaveImporter {
     return dot > 0 ? fileName.substring(0, dot) : fileName;
   }
 
-  private static List<NewRespondent> respondents(SurveyTable table, List<Column> texts) {
+  /**
+   * Builds the respondents of a table, analysing every answer that is not already stored with the
+   * same text (those would be duplicates, and analysing them is wasted work).
+   */
+  private static List<NewRespondent> respondents(
+      SurveyTable table, List<Column> texts, Map<String, String> stored, Progress progress) {
     Optional<Column> id = first(table, ColumnRole.ID);
     Optional<Column> date = first(table, ColumnRole.DATE);
     Optional<Column> coder = first(table, ColumnRole.CODER);
     List<Column> metas = table.columnsWith(ColumnRole.META);
     List<Column> codes = table.columnsWith(ColumnRole.CODES);
-    List<NewRespondent> out = new ArrayList<>(table.rows().size());
+    List<String> ids = new ArrayList<>(table.rows().size());
+    List<String> fresh = new ArrayList<>();
     for (SurveyRow row : table.rows()) {
       String externalId = id.map(c -> row.cell(c).strip()).orElse("");
       if (externalId.isEmpty()) {
         externalId = "row-" + row.number();
       }
+      ids.add(externalId);
+      for (Column t : texts) {
+        String original = row.cell(t);
+        if (!original.equals(stored.get(ProjectStore.answerKey(externalId, t.header())))) {
+          fresh.add(Normalizer.normalize(original, Normalizer.Form.NFC));
+        }
+      }
+    }
+    Iterator<Analysis> analyses = Analyses.analyzer().analyzeAll(fresh, progress).iterator();
+    List<NewRespondent> out = new ArrayList<>(table.rows().size());
+    for (int r = 0; r < table.rows().size(); r++) {
+      SurveyRow row = table.rows().get(r);
+      String externalId = ids.get(r);
       Map<String, String> meta = new LinkedHashMap<>();
       for (Column m : metas) {
         String value = row.cell(m).strip();
@@ -168,6 +193,8 @@ final class WaveImporter {
       List<NewAnswer> answers = new ArrayList<>(texts.size());
       for (Column t : texts) {
         String original = row.cell(t);
+        String normalized = Normalizer.normalize(original, Normalizer.Form.NFC);
+        boolean known = original.equals(stored.get(ProjectStore.answerKey(externalId, t.header())));
         List<String> assigned = new ArrayList<>();
         for (Column c : codes) {
           if (c.answersColumn() == t.index()) {
@@ -178,12 +205,13 @@ final class WaveImporter {
             new NewAnswer(
                 t.header(),
                 original,
-                Normalizer.normalize(original, Normalizer.Form.NFC),
+                normalized,
                 !NonAnswers.isNonAnswer(original),
                 row.line(),
                 t.index() + 1,
                 assigned,
-                coderName));
+                coderName,
+                known ? Analyses.unanalysed(normalized) : analyses.next()));
       }
       out.add(
           new NewRespondent(

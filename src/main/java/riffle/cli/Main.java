@@ -19,6 +19,7 @@ import picocli.CommandLine.Spec;
     subcommands = {
       ImportCommand.class,
       InfoCommand.class,
+      AnalyzeCommand.class,
       DemoCommand.class,
       CommandLine.HelpCommand.class
     })

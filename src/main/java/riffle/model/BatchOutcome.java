@@ -11,6 +11,7 @@ import java.util.List;
  * @param codesCreated codes new to the codebook (from codes columns)
  * @param assignmentsAdded imported assignments stored
  * @param problems answers refused because the wave holds a different text for them
+ * @param added the answers stored, with their new ids, in batch order
  */
 public record BatchOutcome(
     int respondentsAdded,
@@ -18,8 +19,18 @@ public record BatchOutcome(
     int duplicateRows,
     int codesCreated,
     int assignmentsAdded,
-    List<InputProblem> problems) {
+    List<InputProblem> problems,
+    List<Added> added) {
   public BatchOutcome {
     problems = List.copyOf(problems);
+    added = List.copyOf(added);
   }
+
+  /**
+   * An answer the batch stored.
+   *
+   * @param id its id in the project
+   * @param answer what was stored
+   */
+  public record Added(long id, NewAnswer answer) {}
 }

@@ -14,6 +14,7 @@ import java.util.Objects;
  * @param column the 1-based field number of the answer
  * @param codes codes assigned elsewhere, in the order given; empty when none
  * @param coder who assigned {@code codes}
+ * @param analysis the text analysis of {@code normalized}: masked text, language, masks, parse
  */
 public record NewAnswer(
     String question,
@@ -23,12 +24,14 @@ public record NewAnswer(
     long line,
     int column,
     List<String> codes,
-    String coder) {
+    String coder,
+    Analysis analysis) {
   public NewAnswer {
     Objects.requireNonNull(question, "question");
     Objects.requireNonNull(original, "original");
     Objects.requireNonNull(normalized, "normalized");
     codes = List.copyOf(codes);
     Objects.requireNonNull(coder, "coder");
+    Objects.requireNonNull(analysis, "analysis");
   }
 }

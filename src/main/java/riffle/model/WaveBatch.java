@@ -18,6 +18,7 @@ import java.util.Objects;
  * @param questions the open-text questions, in column order
  * @param respondents the rows, one respondent each
  * @param actor who ran the import
+ * @param analysedWith the version of the text analysis that analysed the answers
  */
 public record WaveBatch(
     String wave,
@@ -30,7 +31,8 @@ public record WaveBatch(
     int skipped,
     List<String> questions,
     List<NewRespondent> respondents,
-    String actor) {
+    String actor,
+    String analysedWith) {
   public WaveBatch {
     Objects.requireNonNull(wave, "wave");
     Objects.requireNonNull(fieldedOn, "fieldedOn");
@@ -41,5 +43,6 @@ public record WaveBatch(
     questions = List.copyOf(questions);
     respondents = List.copyOf(respondents);
     Objects.requireNonNull(actor, "actor");
+    Objects.requireNonNull(analysedWith, "analysedWith");
   }
 }

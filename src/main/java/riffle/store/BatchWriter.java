@@ -15,6 +15,7 @@ import riffle.model.BatchOutcome;
 import riffle.model.InputProblem;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
+import riffle.model.PiiMask;
 import riffle.model.Progress;
 import riffle.model.WaveBatch;
 
@@ -49,6 +50,7 @@ final class BatchWriter {
     int duplicateRows = 0;
     int assignmentsAdded = 0;
     List<InputProblem> problems = new ArrayList<>();
+    List<BatchOutcome.Added> added = new ArrayList<>();
     try (PreparedStatement newRespondent =
             c.prepareStatement(
                 "INSERT INTO respondent (wave_id, external_id, responded_at, batch_id, source_line)"
@@ -62,8 +64,13 @@ final class BatchWriter {
         PreparedStatement newAnswer =
             c.prepareStatement(
                 "INSERT INTO answer (respondent_id, question_id, original, normalized, substantive,"
-                    + " source_line, source_column) VALUES (?, ?, ?, ?, ?, ?, ?)"
+                    + " source_line, source_column, masked, language, foreign_language,"
+                    + " analysed_with) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)"
                     + " ON CONFLICT (respondent_id, question_id) DO NOTHING RETURNING id");
+        PreparedStatement pii =
+            c.prepareStatement(
+                "INSERT INTO answer_pii (answer_id, type, start, end, masked_start, masked_end)"
+                    + " VALUES (?, ?, ?, ?, ?, ?)");
         PreparedStatement oldAnswer =
             c.prepareStatement(
                 "SELECT original FROM answer WHERE respondent_id = ? AND question_id = ?");
@@ -110,9 +117,20 @@ final class BatchWriter {
           newAnswer.setInt(5, a.substantive() ? 1 : 0);
           newAnswer.setLong(6, a.line());
           newAnswer.setInt(7, a.column());
+          newAnswer.setString(8, a.analysis().masked());
+          newAnswer.setString(9, a.analysis().language());
+          newAnswer.setInt(10, a.analysis().foreign() ? 1 : 0);
+          newAnswer.setString(11, batch.analysedWith());
           Long answerId = returnedId(newAnswer);
           if (answerId != null) {
             rowAdded++;
+            added.add(new BatchOutcome.Added(answerId, a));
+            for (PiiMask m : a.analysis().pii()) {
+              AnalysisWriter.insertMask(pii, answerId, m);
+            }
+            if (!a.analysis().pii().isEmpty()) {
+              pii.executeBatch();
+            }
             for (String code : a.codes()) {
               assign.setLong(1, answerId);
               assign.setLong(2, codeId(code));
@@ -172,7 +190,13 @@ final class BatchWriter {
     detail.put("assignments", assignmentsAdded);
     Audit.record(c, batch.actor(), "import", detail);
     return new BatchOutcome(
-        respondentsAdded, answersAdded, duplicateRows, codesCreated, assignmentsAdded, problems);
+        respondentsAdded,
+        answersAdded,
+        duplicateRows,
+        codesCreated,
+        assignmentsAdded,
+        problems,
+        added);
   }
 
   private static long total(WaveBatch batch) {

@@ -9,11 +9,17 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Properties;
 import org.sqlite.SQLiteErrorCode;
 import org.sqlite.SQLiteException;
+import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
+import riffle.model.PiiMask;
 import riffle.model.Progress;
 import riffle.model.ProjectSummary;
 import riffle.model.WaveBatch;
@@ -167,6 +173,106 @@ public final class ProjectStore implements AutoCloseable {
   /** Stores one import in a single transaction: all of it, or (on any failure) nothing. */
   public BatchOutcome store(WaveBatch batch, Progress progress) throws ProjectFileException {
     return write(c -> new BatchWriter(c, progress).write(batch));
+  }
+
+  /**
+   * An answer's id and analysis text.
+   *
+   * @param id the answer's id
+   * @param normalized its NFC text
+   */
+  public record AnswerText(long id, String normalized) {}
+
+  /**
+   * An analysis to store for an answer.
+   *
+   * @param answerId the answer
+   * @param analysis its analysis
+   */
+  public record Analysed(long answerId, Analysis analysis) {}
+
+  /** Answers not yet analysed by {@code version} (new schema, new analysis rules). */
+  public List<AnswerText> staleAnalyses(String version) throws ProjectFileException {
+    return read(c -> AnalysisWriter.stale(c, version));
+  }
+
+  /** Rewrites the masked text, language and masks of answers, in one transaction. */
+  public void storeAnalyses(List<Analysed> analysed, String version) throws ProjectFileException {
+    write(
+        c -> {
+          AnalysisWriter.update(c, analysed, version);
+          return null;
+        });
+  }
+
+  /**
+   * Texts already stored in a wave, by respondent id and question, so that an import analyses only
+   * what is new.
+   */
+  public Map<String, String> storedTexts(String wave) throws ProjectFileException {
+    return read(
+        c -> {
+          Map<String, String> out = new HashMap<>();
+          try (PreparedStatement ps =
+              c.prepareStatement(
+                  "SELECT r.external_id, q.text, a.original FROM answer a"
+                      + " JOIN respondent r ON r.id = a.respondent_id"
+                      + " JOIN wave w ON w.id = r.wave_id"
+                      + " JOIN question q ON q.id = a.question_id WHERE w.name = ?")) {
+            ps.setString(1, wave);
+            try (ResultSet rs = ps.executeQuery()) {
+              while (rs.next()) {
+                out.put(answerKey(rs.getString(1), rs.getString(2)), rs.getString(3));
+              }
+            }
+          }
+          return out;
+        });
+  }
+
+  /** The key of {@link #storedTexts}: respondent id and question. */
+  public static String answerKey(String respondent, String question) {
+    return respondent + '\u0000' + question;
+  }
+
+  /**
+   * What the project file keeps of an answer's analysis.
+   *
+   * @param id the answer
+   * @param normalized its NFC text
+   * @param masked its masked text, or null before its first analysis
+   * @param language its language, or null before its first analysis
+   * @param foreign whether it is not in the analysis language
+   * @param analysedWith the analysis version that wrote these, or null
+   * @param pii its masks
+   */
+  public record StoredAnalysis(
+      long id,
+      String normalized,
+      String masked,
+      String language,
+      boolean foreign,
+      String analysedWith,
+      List<PiiMask> pii) {}
+
+  /** The stored analysis columns of one answer. */
+  public Optional<StoredAnalysis> storedAnalysis(long answerId) throws ProjectFileException {
+    return read(c -> AnalysisWriter.load(c, answerId));
+  }
+
+  /** Every answer's id, in the order stored. */
+  public List<Long> answerIds() throws ProjectFileException {
+    return read(
+        c -> {
+          List<Long> ids = new ArrayList<>();
+          try (Statement s = c.createStatement();
+              ResultSet rs = s.executeQuery("SELECT id FROM answer ORDER BY id")) {
+            while (rs.next()) {
+              ids.add(rs.getLong(1));
+            }
+          }
+          return ids;
+        });
   }
 
   /** Counts for the whole project. */

@@ -318,6 +318,41 @@ class CliTest {
   }
 
   @Test
+  void analyzePrintsTheFixedJsonKeys() throws IOException {
+    Run run =
+        riffle("analyze", "--text", "Did NOT arrive on time. Call 07700 900123 please", "--json");
+    assertEquals(0, run.code(), run.err());
+    JsonNode json = run.json();
+    assertEquals("eng", json.get("language").asText());
+    assertEquals("Did NOT arrive on time. Call [phone] please", json.get("masked").asText());
+    JsonNode pii = json.get("pii").get(0);
+    assertEquals("phone", pii.get("type").asText());
+    assertEquals(29, pii.get("start").asInt());
+    assertEquals(41, pii.get("end").asInt());
+    JsonNode sentence = json.get("sentences").get(0);
+    assertEquals("Did NOT arrive on time.", sentence.get("text").asText());
+    JsonNode arrive = sentence.get("tokens").get(2);
+    assertEquals("arrive", arrive.get("text").asText());
+    assertEquals(8, arrive.get("start").asInt());
+    assertEquals(14, arrive.get("end").asInt());
+    assertEquals("VB", arrive.get("pos").asText());
+    assertEquals("arriv", arrive.get("stem").asText());
+    assertTrue(arrive.get("negated").asBoolean());
+    JsonNode chunk = sentence.get("chunks").get(0);
+    for (String key : List.of("type", "text", "start", "end")) {
+      assertTrue(chunk.has(key), key);
+    }
+  }
+
+  @Test
+  void analyzePrintsChunksAndTagsForPeople() {
+    Run run = riffle("analyze", "--text", "wasnt sure it would fit");
+    assertEquals(0, run.code(), run.err());
+    assertTrue(run.out().contains("[VP"), run.out());
+    assertTrue(run.out().contains("negated"), run.out());
+  }
+
+  @Test
   void unknownCommandIsAUsageError() {
     Run run = riffle("serve-coffee");
     assertEquals(2, run.code());

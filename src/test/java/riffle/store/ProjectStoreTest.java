@@ -21,6 +21,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
@@ -33,6 +34,10 @@ class ProjectStoreTest {
   static final String Q2 = "What made you choose us?";
 
   @TempDir Path dir;
+
+  static Analysis plain(String text) {
+    return new Analysis("eng", false, text, List.of(), List.of(), false);
+  }
 
   static WaveBatch batch(String wave, int from, int count, String suffix) {
     List<NewRespondent> respondents = new ArrayList<>();
@@ -52,7 +57,8 @@ class ProjectStoreTest {
                       i + 1,
                       2,
                       i % 3 == 0 ? List.of("Delivery date unclear") : List.of(),
-                      "mk"),
+                      "mk",
+                      plain("x")),
                   new NewAnswer(
                       Q2,
                       i % 10 == 0 ? "n/a" : "good value " + i,
@@ -61,7 +67,8 @@ class ProjectStoreTest {
                       i + 1,
                       3,
                       List.of(),
-                      "mk"))));
+                      "mk",
+                      plain("x")))));
     }
     return new WaveBatch(
         wave,
@@ -74,7 +81,8 @@ class ProjectStoreTest {
         0,
         List.of(Q1, Q2),
         respondents,
-        "tester");
+        "tester",
+        "test");
   }
 
   @Test
@@ -170,7 +178,15 @@ class ProjectStoreTest {
               Map.of(),
               List.of(
                   new NewAnswer(
-                      "Undeclared question", "text", "text", true, 99, 2, List.of(), "mk"))));
+                      "Undeclared question",
+                      "text",
+                      "text",
+                      true,
+                      99,
+                      2,
+                      List.of(),
+                      "mk",
+                      plain("x")))));
       WaveBatch broken =
           new WaveBatch(
               "Wave 2",
@@ -183,7 +199,8 @@ class ProjectStoreTest {
               0,
               good.questions(),
               rows,
-              "tester");
+              "tester",
+              "test");
       assertThrows(RuntimeException.class, () -> store.store(broken, Progress.NONE));
       ProjectSummary s = store.summary();
       assertEquals(1, s.waves().size(), "the failed wave was not created");

@@ -1,0 +1,83 @@
+package riffle.app;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import riffle.model.Analysis;
+import riffle.model.BatchOutcome;
+import riffle.model.Progress;
+import riffle.store.AnalysisCache;
+import riffle.store.ProjectFileException;
+import riffle.store.ProjectStore;
+import riffle.text.AnalysisCodec;
+import riffle.text.PiiMasker;
+import riffle.text.TextAnalyzer;
+
+/**
+ * Runs text analysis for the use cases: one shared analyser (its models load once per process), the
+ * analysis columns in the project file, and the parses in the derived cache.
+ */
+public final class Analyses {
+  private Analyses() {}
+
+  /** Analyses one text as an answer would be: masks, language, sentences, tokens, chunks. */
+  public static Analysis analyze(String text) {
+    return analyzer().analyze(text);
+  }
+
+  /** The process's analyser, created on first use. */
+  static TextAnalyzer analyzer() {
+    return Holder.ANALYZER;
+  }
+
+  private static final class Holder {
+    static final TextAnalyzer ANALYZER =
+        TextAnalyzer.withModelFolders(
+            List.of(
+                Path.of("models"), Path.of(System.getProperty("user.home"), ".riffle", "models")),
+            PiiMasker.standard());
+  }
+
+  /** The analysis a duplicate answer gets: it is never stored, so nothing is worth computing. */
+  static Analysis unanalysed(String text) {
+    return new Analysis("und", false, text, List.of(), List.of(), false);
+  }
+
+  /** Writes the parses of newly stored answers to the derived cache. */
+  static void cache(Path project, List<BatchOutcome.Added> added) throws ProjectFileException {
+    List<AnalysisCache.Entry> entries = new ArrayList<>(added.size());
+    for (BatchOutcome.Added a : added) {
+      entries.add(
+          new AnalysisCache.Entry(a.id(), AnalysisCodec.encode(a.answer().analysis().sentences())));
+    }
+    try (AnalysisCache cache = AnalysisCache.open(project)) {
+      cache.putAll(entries, AnalysisCodec.VERSION);
+    }
+  }
+
+  /**
+   * Analyses again every answer that an older analysis version (or none) analysed, and caches the
+   * parses. Returns how many answers it analysed.
+   */
+  static int refresh(ProjectStore store, Progress progress) throws ProjectFileException {
+    List<ProjectStore.AnswerText> stale = store.staleAnalyses(AnalysisCodec.VERSION);
+    if (stale.isEmpty()) {
+      return 0;
+    }
+    List<Analysis> analyses =
+        analyzer()
+            .analyzeAll(stale.stream().map(ProjectStore.AnswerText::normalized).toList(), progress);
+    List<ProjectStore.Analysed> rows = new ArrayList<>(stale.size());
+    List<AnalysisCache.Entry> entries = new ArrayList<>(stale.size());
+    for (int i = 0; i < stale.size(); i++) {
+      long id = stale.get(i).id();
+      rows.add(new ProjectStore.Analysed(id, analyses.get(i)));
+      entries.add(new AnalysisCache.Entry(id, AnalysisCodec.encode(analyses.get(i).sentences())));
+    }
+    store.storeAnalyses(rows, AnalysisCodec.VERSION);
+    try (AnalysisCache cache = AnalysisCache.open(store.file())) {
+      cache.putAll(entries, AnalysisCodec.VERSION);
+    }
+    return stale.size();
+  }
+}

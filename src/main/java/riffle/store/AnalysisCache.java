@@ -1,0 +1,148 @@
+package riffle.store;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.List;
+import java.util.Optional;
+import java.util.Properties;
+
+/**
+ * The derived analysis cache beside a project ({@code NAME.riffle.d/analysis.db}): each answer's
+ * parsed sentences, keyed by answer id and stamped with the analysis version. Derived, never the
+ * source of truth: a missing, damaged or foreign cache is deleted and rebuilt, and losing it loses
+ * no work. Not thread-safe: one instance per thread.
+ */
+public final class AnalysisCache implements AutoCloseable {
+  private static final int APPLICATION_ID = 0x52664331;
+
+  private final Connection connection;
+
+  private AnalysisCache(Connection connection) {
+    this.connection = connection;
+  }
+
+  /** The folder of derived files for a project file: {@code NAME.riffle.d}. */
+  public static Path derivedFolder(Path projectFile) {
+    return projectFile.resolveSibling(projectFile.getFileName() + ".d");
+  }
+
+  /** Opens the cache of {@code projectFile}, creating or rebuilding it as needed. */
+  public static AnalysisCache open(Path projectFile) throws ProjectFileException {
+    Path folder = derivedFolder(projectFile);
+    Path file = folder.resolve("analysis.db");
+    try {
+      Files.createDirectories(folder);
+      try {
+        return connect(file);
+      } catch (SQLException damaged) {
+        for (String suffix : List.of("", "-wal", "-shm")) {
+          Files.deleteIfExists(folder.resolve("analysis.db" + suffix));
+        }
+        return connect(file);
+      }
+    } catch (IOException | SQLException e) {
+      throw new ProjectFileException(
+          "cannot write the analysis cache in " + folder + ": " + e.getMessage(), e);
+    }
+  }
+
+  private static AnalysisCache connect(Path file) throws SQLException {
+    Properties p = new Properties();
+    p.setProperty("journal_mode", "WAL");
+    p.setProperty("synchronous", "OFF");
+    p.setProperty("busy_timeout", Integer.toString(ProjectStore.BUSY_TIMEOUT_MS));
+    Connection c = DriverManager.getConnection("jdbc:sqlite:" + file, p);
+    try (Statement s = c.createStatement()) {
+      int appId = ProjectStore.pragmaInt(c, "application_id");
+      if (appId != APPLICATION_ID) {
+        s.executeUpdate("DROP TABLE IF EXISTS analysis");
+        s.executeUpdate(
+            "CREATE TABLE analysis (answer_id INTEGER PRIMARY KEY, version TEXT NOT NULL,"
+                + " data BLOB NOT NULL)");
+        s.executeUpdate("PRAGMA application_id = " + APPLICATION_ID);
+      }
+      try (ResultSet rs = s.executeQuery("SELECT count(*) FROM analysis")) {
+        rs.next();
+      }
+    } catch (SQLException e) {
+      c.close();
+      throw e;
+    }
+    return new AnalysisCache(c);
+  }
+
+  /** One answer's cached parse. */
+  public record Entry(long answerId, byte[] data) {}
+
+  /** Stores entries in one transaction, replacing older ones. */
+  public void putAll(List<Entry> entries, String version) throws ProjectFileException {
+    try {
+      connection.setAutoCommit(false);
+      try (PreparedStatement ps =
+          connection.prepareStatement(
+              "INSERT OR REPLACE INTO analysis (answer_id, version, data) VALUES (?, ?, ?)")) {
+        for (Entry e : entries) {
+          ps.setLong(1, e.answerId());
+          ps.setString(2, version);
+          ps.setBytes(3, e.data());
+          ps.addBatch();
+        }
+        ps.executeBatch();
+      }
+      connection.commit();
+    } catch (SQLException e) {
+      throw new ProjectFileException("cannot write the analysis cache: " + e.getMessage(), e);
+    } finally {
+      try {
+        connection.setAutoCommit(true);
+      } catch (SQLException e) {
+        // The connection is unusable; the next open rebuilds the cache.
+      }
+    }
+  }
+
+  /** The cached parse of an answer, when present and written by {@code version}. */
+  public Optional<byte[]> get(long answerId, String version) throws ProjectFileException {
+    try (PreparedStatement ps =
+        connection.prepareStatement("SELECT version, data FROM analysis WHERE answer_id = ?")) {
+      ps.setLong(1, answerId);
+      try (ResultSet rs = ps.executeQuery()) {
+        if (rs.next() && rs.getString(1).equals(version)) {
+          return Optional.of(rs.getBytes(2));
+        }
+        return Optional.empty();
+      }
+    } catch (SQLException e) {
+      throw new ProjectFileException("cannot read the analysis cache: " + e.getMessage(), e);
+    }
+  }
+
+  /** How many answers have a parse from {@code version}. */
+  public int count(String version) throws ProjectFileException {
+    try (PreparedStatement ps =
+        connection.prepareStatement("SELECT count(*) FROM analysis WHERE version = ?")) {
+      ps.setString(1, version);
+      try (ResultSet rs = ps.executeQuery()) {
+        return rs.next() ? rs.getInt(1) : 0;
+      }
+    } catch (SQLException e) {
+      throw new ProjectFileException("cannot read the analysis cache: " + e.getMessage(), e);
+    }
+  }
+
+  @Override
+  public void close() {
+    try {
+      connection.close();
+    } catch (SQLException e) {
+      // Nothing to keep: the cache is derived.
+    }
+  }
+}
