@@ -8,63 +8,72 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Stream;
-import riffle.app.ImportReport;
-import riffle.app.ImportRequest;
-import riffle.app.ImportSource;
-import riffle.app.Project;
-import riffle.model.Progress;
 
 /**
  * Bench command: imports a generated export (100,000 respondents by default, two open-text
- * questions, three segments) into a fresh project, several times, and prints the time spent
- * reading, analysing (masks, language, parse) and storing. Run with {@code mvn -q test-compile
- * exec:java -Dexec.mainClass=riffle.tools.ImportBench [-Dexec.args="ROWS RUNS"]}. Not a test:
- * timings belong in closing notes, not in assertions.
+ * questions, three segments) with {@code riffle import}, each run in a fresh JVM into a fresh
+ * project — as an analyst runs it, model loading and cold caches included — and prints the wall
+ * time of each run and their median. Run with {@code mvn -q test-compile exec:java
+ * -Dexec.mainClass=riffle.tools.ImportBench [-Dexec.args="RESPONDENTS RUNS"]} after {@code mvn -q
+ * -DskipTests package}: each run is {@code java -jar target/riffle.jar import}.
  */
 public final class ImportBench {
+  static final Path JAR = Path.of("target", "riffle.jar");
+
   private ImportBench() {}
 
-  public static void main(String[] args) throws IOException {
+  public static void main(String[] args) throws IOException, InterruptedException {
     int rows = args.length > 0 ? Integer.parseInt(args[0]) : 100_000;
-    int runs = args.length > 1 ? Integer.parseInt(args[1]) : 5;
+    int runs = args.length > 1 ? Integer.parseInt(args[1]) : 3;
+    if (!Files.isRegularFile(JAR)) {
+      throw new IllegalStateException("build the jar first: mvn -q -DskipTests package");
+    }
     Path dir = Files.createTempDirectory("riffle-bench");
     try {
       Path export = dir.resolve("large.csv");
       SampleResponses.writeLargeExport(export, rows, 42L);
       System.out.printf(
           Locale.ROOT,
-          "export: %,d respondents, %.1f MB, %s cores, max heap %d MB%n",
+          "export: %,d respondents (%,d answers), %.1f MB, %d cores%n",
           rows,
+          2 * rows,
           Files.size(export) / 1e6,
-          Runtime.getRuntime().availableProcessors(),
-          Runtime.getRuntime().maxMemory() >> 20);
-      Path warmup = dir.resolve("warmup.csv");
-      SampleResponses.writeLargeExport(warmup, 20_000, 7L);
-      once(dir.resolve("warmup.riffle"), warmup);
-      List<double[]> results = new ArrayList<>();
+          Runtime.getRuntime().availableProcessors());
+      List<Double> seconds = new ArrayList<>();
       for (int run = 1; run <= runs; run++) {
-        double[] t = once(dir.resolve("run" + run + ".riffle"), export);
-        results.add(t);
-        System.out.printf(
-            Locale.ROOT,
-            "run %d: read %.2f s, analyse %.2f s, store %.2f s, total %.2f s%n",
-            run,
-            t[0],
-            t[1],
-            t[2],
-            t[0] + t[1] + t[2]);
+        Path project = dir.resolve("run" + run + ".riffle");
+        Path log = dir.resolve("run" + run + ".log");
+        Process p =
+            new ProcessBuilder(
+                    Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                    "-jar",
+                    JAR.toString(),
+                    "import",
+                    "--project",
+                    project.toString(),
+                    "--file",
+                    export.toString(),
+                    "--wave",
+                    "Bench")
+                .redirectErrorStream(true)
+                .redirectOutput(log.toFile())
+                .start();
+        long start = System.nanoTime();
+        int code = p.waitFor();
+        double s = (System.nanoTime() - start) / 1e9;
+        if (code != 0) {
+          throw new IllegalStateException("import failed: " + Files.readString(log));
+        }
+        seconds.add(s);
+        System.out.printf(Locale.ROOT, "run %d: %.2f s%n", run, s);
       }
-      results.sort(Comparator.comparingDouble(t -> t[0] + t[1] + t[2]));
-      double[] median = results.get(results.size() / 2);
+      seconds.sort(Comparator.naturalOrder());
       System.out.printf(
           Locale.ROOT,
-          "median of %d (%,d answers): read %.2f s, analyse %.2f s, store %.2f s, total %.2f s%n",
+          "median of %d: %.2f s for %,d answers, read, analysed and stored%n",
           runs,
-          2 * rows,
-          median[0],
-          median[1],
-          median[2],
-          median[0] + median[1] + median[2]);
+          seconds.get(seconds.size() / 2),
+          2 * rows);
     } finally {
       try (Stream<Path> files = Files.walk(dir)) {
         for (Path p : files.sorted(Comparator.reverseOrder()).toList()) {
@@ -72,35 +81,5 @@ public final class ImportBench {
         }
       }
     }
-  }
-
-  /** Imports {@code export} into a new project; returns seconds reading, analysing, storing. */
-  private static double[] once(Path project, Path export) throws IOException {
-    long[] analysingFrom = {0};
-    long[] storingFrom = {0};
-    Progress timing =
-        (phase, done, total) -> {
-          if (phase.equals("analysing") && analysingFrom[0] == 0) {
-            analysingFrom[0] = System.nanoTime();
-          }
-          if (phase.equals("storing") && storingFrom[0] == 0) {
-            storingFrom[0] = System.nanoTime();
-          }
-        };
-    long start = System.nanoTime();
-    ImportReport report =
-        Project.importInto(
-            project,
-            ImportRequest.from(new ImportSource.File(export)).wave("Bench").actor("bench").get(),
-            timing);
-    long end = System.nanoTime();
-    if (report.answers() != 2 * report.rows()) {
-      throw new IllegalStateException("bench import lost answers: " + report);
-    }
-    return new double[] {
-      (analysingFrom[0] - start) / 1e9,
-      (storingFrom[0] - analysingFrom[0]) / 1e9,
-      (end - storingFrom[0]) / 1e9
-    };
   }
 }
