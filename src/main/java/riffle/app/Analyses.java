@@ -3,9 +3,11 @@ package riffle.app;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.Progress;
+import riffle.model.Sentence;
 import riffle.store.AnalysisCache;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
@@ -41,6 +43,27 @@ public final class Analyses {
   /** The analysis a duplicate answer gets: it is never stored, so nothing is worth computing. */
   static Analysis unanalysed(String text) {
     return new Analysis("und", false, text, List.of(), List.of(), false);
+  }
+
+  /**
+   * An answer's sentences from the cache, analysed afresh and cached again when the entry is
+   * missing, stale or damaged.
+   */
+  static List<Sentence> sentences(
+      AnalysisCache cache, long answerId, String masked, String normalized)
+      throws ProjectFileException {
+    Optional<List<Sentence>> cached =
+        cache
+            .get(answerId, AnalysisCodec.VERSION)
+            .flatMap(bytes -> AnalysisCodec.decode(masked, bytes));
+    if (cached.isPresent()) {
+      return cached.get();
+    }
+    List<Sentence> fresh = analyzer().analyze(normalized).sentences();
+    cache.putAll(
+        List.of(new AnalysisCache.Entry(answerId, AnalysisCodec.encode(fresh))),
+        AnalysisCodec.VERSION);
+    return fresh;
   }
 
   /** Writes the parses of newly stored answers to the derived cache. */

@@ -1,15 +1,19 @@
 package riffle.app;
 
+import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import riffle.index.AnswerIndex;
 import riffle.ingest.SurveyTable;
 import riffle.model.Analysis;
 import riffle.model.InputException;
 import riffle.model.Progress;
 import riffle.model.ProjectSummary;
+import riffle.model.SearchResult;
 import riffle.model.Sentence;
 import riffle.store.AnalysisCache;
+import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
 import riffle.text.AnalysisCodec;
 import riffle.text.TextAnalyzer;
@@ -17,6 +21,7 @@ import riffle.text.TextAnalyzer;
 /** An open project and the use cases on it. Not thread-safe: one instance per thread. */
 public final class Project implements AutoCloseable {
   private final ProjectStore store;
+  private AnswerIndex index;
 
   private Project(ProjectStore store) {
     this.store = store;
@@ -47,7 +52,20 @@ public final class Project implements AutoCloseable {
    */
   public ImportReport importWave(ImportRequest request, Progress progress) throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
-    return new WaveImporter(store).store(request, table, progress);
+    return importTable(request, table, progress);
+  }
+
+  private ImportReport importTable(ImportRequest request, SurveyTable table, Progress progress)
+      throws InputException {
+    String stampBefore = Indexes.stamp(store);
+    long lastBefore = store.lastAnswerId();
+    ImportReport report = new WaveImporter(store).store(request, table, progress);
+    if (index != null) {
+      index.close();
+      index = null;
+    }
+    Indexes.afterImport(store, stampBefore, lastBefore);
+    return report;
   }
 
   /**
@@ -60,7 +78,7 @@ public final class Project implements AutoCloseable {
       throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
     try (Project project = openOrCreate(file)) {
-      return new WaveImporter(project.store).store(request, table, progress);
+      return project.importTable(request, table, progress);
     }
   }
 
@@ -80,25 +98,39 @@ public final class Project implements AutoCloseable {
     }
     ProjectStore.StoredAnalysis s = stored.orElseThrow();
     try (AnalysisCache cache = AnalysisCache.open(store.file())) {
-      Optional<List<Sentence>> sentences =
-          cache
-              .get(answerId, AnalysisCodec.VERSION)
-              .flatMap(bytes -> AnalysisCodec.decode(s.masked(), bytes));
-      if (sentences.isEmpty()) {
-        Analysis fresh = Analyses.analyzer().analyze(s.normalized());
-        cache.putAll(
-            List.of(new AnalysisCache.Entry(answerId, AnalysisCodec.encode(fresh.sentences()))),
-            AnalysisCodec.VERSION);
-        sentences = Optional.of(fresh.sentences());
-      }
+      List<Sentence> sentences = Analyses.sentences(cache, answerId, s.masked(), s.normalized());
       return Optional.of(
           new Analysis(
               s.language(),
               s.foreign(),
               s.masked(),
               s.pii(),
-              sentences.get(),
+              sentences,
               !s.foreign() && TextAnalyzer.truncates(s.masked())));
+    }
+  }
+
+  /**
+   * Runs an analyst's query over every answer (see the README for the query language).
+   *
+   * @throws InputException when the query cannot be read; its problem gives the column
+   */
+  public SearchResult search(String query, int limit) throws InputException {
+    try {
+      return index().search(query, store.questions(), limit);
+    } catch (InputException e) {
+      throw e;
+    } catch (IOException e) {
+      throw new ProjectFileException("the search index cannot be read: " + e.getMessage());
+    }
+  }
+
+  /** Answers like the given one, most alike first. */
+  public SearchResult similar(long answerId, int limit) throws InputException {
+    try {
+      return index().similar(answerId, limit);
+    } catch (IOException e) {
+      throw new ProjectFileException("the search index cannot be read: " + e.getMessage());
     }
   }
 
@@ -112,8 +144,22 @@ public final class Project implements AutoCloseable {
     return store.summary();
   }
 
+  /** The open index, brought up to date with the project first. */
+  private AnswerIndex index() throws InputException {
+    if (index == null) {
+      index = Indexes.current(store);
+    } else {
+      Indexes.catchUp(store, index);
+    }
+    return index;
+  }
+
   @Override
   public void close() {
+    if (index != null) {
+      index.close();
+      index = null;
+    }
     store.close();
   }
 }

@@ -20,6 +20,7 @@ import picocli.CommandLine.Spec;
       ImportCommand.class,
       InfoCommand.class,
       AnalyzeCommand.class,
+      SearchCommand.class,
       DemoCommand.class,
       CommandLine.HelpCommand.class
     })

@@ -275,6 +275,67 @@ public final class ProjectStore implements AutoCloseable {
         });
   }
 
+  /**
+   * An answer with its place in the project, as derived indexes need it.
+   *
+   * @param id the answer's id
+   * @param respondent the respondent's id from the export
+   * @param wave the wave's name
+   * @param question the question's text
+   * @param masked the masked text (the NFC text before its first analysis)
+   * @param normalized the NFC text
+   * @param substantive false for non-answers
+   * @param codes names of its codes, in codebook order
+   * @param segments the respondent's segment values
+   */
+  public record AnswerRow(
+      long id,
+      String respondent,
+      String wave,
+      String question,
+      String masked,
+      String normalized,
+      boolean substantive,
+      List<String> codes,
+      Map<String, String> segments) {}
+
+  /** Every answer with an id above {@code afterId}, in id order (0 for all). */
+  public List<AnswerRow> answerRows(long afterId) throws ProjectFileException {
+    return read(c -> AnswerRows.all(c, afterId));
+  }
+
+  /** The newest answer's id, or 0 in an empty project. */
+  public long lastAnswerId() throws ProjectFileException {
+    return read(
+        c -> {
+          try (Statement s = c.createStatement();
+              ResultSet rs = s.executeQuery("SELECT coalesce(max(id), 0) FROM answer")) {
+            rs.next();
+            return rs.getLong(1);
+          }
+        });
+  }
+
+  /** The questions, in the order first seen. */
+  public List<String> questions() throws ProjectFileException {
+    return read(
+        c -> {
+          List<String> out = new ArrayList<>();
+          try (Statement s = c.createStatement();
+              ResultSet rs = s.executeQuery("SELECT text FROM question ORDER BY position")) {
+            while (rs.next()) {
+              out.add(rs.getString(1));
+            }
+          }
+          return out;
+        });
+  }
+
+  /** A fingerprint that changes whenever answers, assignments or the audit log change. */
+  public String contentStamp() throws ProjectFileException {
+    return read(AnswerRows::stamp);
+  }
+
   /** Counts for the whole project. */
   public ProjectSummary summary() throws ProjectFileException {
     return read(Summaries::summary);

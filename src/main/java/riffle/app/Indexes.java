@@ -1,0 +1,122 @@
+package riffle.app;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import riffle.index.AnswerIndex;
+import riffle.index.IndexedAnswer;
+import riffle.model.Chunk;
+import riffle.model.Sentence;
+import riffle.store.AnalysisCache;
+import riffle.store.ProjectFileException;
+import riffle.store.ProjectStore;
+import riffle.text.AnalysisCodec;
+
+/**
+ * Keeps the derived answer index in step with the project file: stamped with what it was built
+ * from, added to after an import, and rebuilt whenever its stamp no longer matches.
+ */
+final class Indexes {
+  private Indexes() {}
+
+  static Path folder(Path project) {
+    return AnalysisCache.derivedFolder(project).resolve("index");
+  }
+
+  /** What an index built now would be stamped with. */
+  static String stamp(ProjectStore store) throws ProjectFileException {
+    return AnswerIndex.VERSION + "|" + AnalysisCodec.VERSION + "|" + store.contentStamp();
+  }
+
+  /** Opens the project's index, rebuilding it first when missing, stale or damaged. */
+  static AnswerIndex current(ProjectStore store) throws ProjectFileException {
+    String stamp = stamp(store);
+    AnswerIndex index = open(store);
+    try {
+      if (!index.stamp().equals(Optional.of(stamp))) {
+        index.rebuild(answers(store, 0), stamp);
+      }
+      return index;
+    } catch (IOException e) {
+      index.close();
+      throw cannot(store, e);
+    }
+  }
+
+  /** Rebuilds an open index when the project changed since it was built. */
+  static void catchUp(ProjectStore store, AnswerIndex index) throws ProjectFileException {
+    String stamp = stamp(store);
+    if (!index.stamp().equals(Optional.of(stamp))) {
+      try {
+        index.rebuild(answers(store, 0), stamp);
+      } catch (IOException e) {
+        throw cannot(store, e);
+      }
+    }
+  }
+
+  /**
+   * After an import: when the index was current before it, adds the new answers; otherwise it is
+   * left to be rebuilt on its next use.
+   */
+  static void afterImport(ProjectStore store, String stampBefore, long lastIdBefore)
+      throws ProjectFileException {
+    if (!Files.isDirectory(folder(store.file()))) {
+      return;
+    }
+    try (AnswerIndex index = open(store)) {
+      if (index.stamp().equals(Optional.of(stampBefore))) {
+        index.add(answers(store, lastIdBefore), stamp(store));
+      }
+    } catch (IOException e) {
+      throw cannot(store, e);
+    }
+  }
+
+  private static AnswerIndex open(ProjectStore store) throws ProjectFileException {
+    try {
+      return AnswerIndex.open(folder(store.file()));
+    } catch (IOException e) {
+      throw cannot(store, e);
+    }
+  }
+
+  private static ProjectFileException cannot(ProjectStore store, IOException e) {
+    return new ProjectFileException(
+        "cannot build the search index in "
+            + folder(store.file())
+            + " ("
+            + e.getMessage()
+            + "); check free space and permissions, or delete that folder to rebuild it");
+  }
+
+  /** The answers with an id above {@code afterId}, with their chunk phrases from the cache. */
+  static List<IndexedAnswer> answers(ProjectStore store, long afterId) throws ProjectFileException {
+    List<ProjectStore.AnswerRow> rows = store.answerRows(afterId);
+    List<IndexedAnswer> out = new ArrayList<>(rows.size());
+    try (AnalysisCache cache = AnalysisCache.open(store.file())) {
+      for (ProjectStore.AnswerRow r : rows) {
+        List<String> chunks = new ArrayList<>();
+        for (Sentence s : Analyses.sentences(cache, r.id(), r.masked(), r.normalized())) {
+          for (Chunk c : s.chunks()) {
+            chunks.add(c.text());
+          }
+        }
+        out.add(
+            new IndexedAnswer(
+                r.id(),
+                r.respondent(),
+                r.wave(),
+                r.question(),
+                r.masked(),
+                r.codes(),
+                r.segments(),
+                chunks));
+      }
+    }
+    return out;
+  }
+}

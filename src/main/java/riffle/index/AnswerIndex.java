@@ -1,0 +1,340 @@
+package riffle.index;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.stream.Stream;
+import org.apache.lucene.analysis.Analyzer;
+import org.apache.lucene.document.Document;
+import org.apache.lucene.document.Field;
+import org.apache.lucene.document.FieldType;
+import org.apache.lucene.document.NumericDocValuesField;
+import org.apache.lucene.document.SortedDocValuesField;
+import org.apache.lucene.document.StoredField;
+import org.apache.lucene.document.StringField;
+import org.apache.lucene.document.TextField;
+import org.apache.lucene.index.FieldInfo;
+import org.apache.lucene.index.IndexOptions;
+import org.apache.lucene.index.IndexWriter;
+import org.apache.lucene.index.IndexWriterConfig;
+import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.index.SortedDocValues;
+import org.apache.lucene.index.StoredFields;
+import org.apache.lucene.index.Term;
+import org.apache.lucene.queries.mlt.MoreLikeThis;
+import org.apache.lucene.search.BooleanClause;
+import org.apache.lucene.search.BooleanQuery;
+import org.apache.lucene.search.CollectorManager;
+import org.apache.lucene.search.IndexSearcher;
+import org.apache.lucene.search.Query;
+import org.apache.lucene.search.ScoreDoc;
+import org.apache.lucene.search.ScoreMode;
+import org.apache.lucene.search.SearcherManager;
+import org.apache.lucene.search.SimpleCollector;
+import org.apache.lucene.search.TermQuery;
+import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.store.Directory;
+import org.apache.lucene.store.FSDirectory;
+import org.apache.lucene.util.BytesRef;
+import riffle.model.SearchHit;
+import riffle.model.SearchResult;
+
+/**
+ * The answers' Lucene index in a folder of its own. Its commit carries a stamp saying what it was
+ * built from; a caller compares the stamp with the project and rebuilds when they differ. A folder
+ * that holds no readable index (missing, damaged, another version) opens empty, so the next {@link
+ * #rebuild} replaces it. Thread-safe: searches may run while answers are added.
+ */
+public final class AnswerIndex implements AutoCloseable {
+  /** Bump when fields or analysis change: older indexes are then rebuilt. */
+  public static final String VERSION = "index-1";
+
+  private static final String STAMP = "riffle.stamp";
+  private static final String ID_KEY = "idkey";
+
+  private static final FieldType HIGHLIGHTED = highlighted();
+
+  private final Path folder;
+  private final Directory directory;
+  private final IndexWriter writer;
+  private final SearcherManager searchers;
+  private final Analyzer analyzer = Fields.analyzer();
+
+  private AnswerIndex(Path folder, Directory directory, IndexWriter writer) throws IOException {
+    this.folder = folder;
+    this.directory = directory;
+    this.writer = writer;
+    this.searchers = new SearcherManager(writer, null);
+  }
+
+  private static FieldType highlighted() {
+    FieldType t = new FieldType(TextField.TYPE_STORED);
+    t.setIndexOptions(IndexOptions.DOCS_AND_FREQS_AND_POSITIONS_AND_OFFSETS);
+    t.setStoreTermVectors(true);
+    t.freeze();
+    return t;
+  }
+
+  /** Opens the index in {@code folder}; an unreadable one is cleared. */
+  public static AnswerIndex open(Path folder) throws IOException {
+    Files.createDirectories(folder);
+    try {
+      return openWriter(folder, IndexWriterConfig.OpenMode.CREATE_OR_APPEND);
+    } catch (IOException | IllegalArgumentException e) {
+      clear(folder);
+      return openWriter(folder, IndexWriterConfig.OpenMode.CREATE);
+    }
+  }
+
+  private static AnswerIndex openWriter(Path folder, IndexWriterConfig.OpenMode mode)
+      throws IOException {
+    Directory dir = FSDirectory.open(folder);
+    try {
+      IndexWriterConfig config = new IndexWriterConfig(Fields.analyzer()).setOpenMode(mode);
+      config.setRAMBufferSizeMB(64);
+      IndexWriter w = new IndexWriter(dir, config);
+      return new AnswerIndex(folder, dir, w);
+    } catch (IOException | RuntimeException e) {
+      dir.close();
+      throw e;
+    }
+  }
+
+  private static void clear(Path folder) throws IOException {
+    try (Stream<Path> files = Files.list(folder)) {
+      for (Path f : files.sorted(Comparator.reverseOrder()).toList()) {
+        Files.deleteIfExists(f);
+      }
+    }
+  }
+
+  /** What the index was built from, as the last commit said; empty for a new index. */
+  public Optional<String> stamp() {
+    Map<String, String> data = new HashMap<>();
+    writer.getLiveCommitData().forEach(e -> data.put(e.getKey(), e.getValue()));
+    return Optional.ofNullable(data.get(STAMP));
+  }
+
+  /** Replaces everything with {@code answers} and commits with {@code stamp}. */
+  public void rebuild(Iterable<IndexedAnswer> answers, String stamp) throws IOException {
+    writer.deleteAll();
+    for (IndexedAnswer a : answers) {
+      writer.addDocument(document(a));
+    }
+    commit(stamp);
+  }
+
+  /** Adds answers (replacing any with the same id) and commits with {@code stamp}. */
+  public void add(List<IndexedAnswer> answers, String stamp) throws IOException {
+    for (IndexedAnswer a : answers) {
+      writer.updateDocument(new Term(ID_KEY, Long.toString(a.answerId())), document(a));
+    }
+    commit(stamp);
+  }
+
+  private void commit(String stamp) throws IOException {
+    writer.setLiveCommitData(Map.of(STAMP, stamp).entrySet());
+    writer.commit();
+    searchers.maybeRefreshBlocking();
+  }
+
+  private static Document document(IndexedAnswer a) {
+    Document d = new Document();
+    d.add(new StringField(ID_KEY, Long.toString(a.answerId()), Field.Store.NO));
+    d.add(new StoredField(Fields.ID, a.answerId()));
+    d.add(new NumericDocValuesField(Fields.ID, a.answerId()));
+    d.add(new Field(Fields.TEXT, a.text(), HIGHLIGHTED));
+    d.add(new TextField(Fields.EXACT, a.text(), Field.Store.NO));
+    d.add(new TextField(Fields.NGRAMS, a.text(), Field.Store.NO));
+    for (String chunk : a.chunks()) {
+      d.add(new StringField(Fields.CHUNK, Fields.key(chunk), Field.Store.NO));
+    }
+    d.add(new StringField(Fields.WAVE, Fields.key(a.wave()), Field.Store.NO));
+    d.add(new SortedDocValuesField(Fields.WAVE, new BytesRef(a.wave())));
+    d.add(new StoredField(Fields.WAVE, a.wave()));
+    d.add(new StringField(Fields.QUESTION, Fields.key(a.question()), Field.Store.YES));
+    d.add(new StoredField(Fields.QUESTION + ".text", a.question()));
+    d.add(new StoredField(Fields.RESPONDENT, a.respondent()));
+    for (String code : a.codes()) {
+      d.add(new StringField(Fields.CODE, Fields.key(code), Field.Store.NO));
+    }
+    d.add(new StringField(Fields.CODED, a.codes().isEmpty() ? "no" : "yes", Field.Store.NO));
+    for (Map.Entry<String, String> s : a.segments().entrySet()) {
+      d.add(
+          new StringField(
+              Fields.SEGMENT + Fields.key(s.getKey()), Fields.key(s.getValue()), Field.Store.NO));
+    }
+    return d;
+  }
+
+  /** How many answers the index holds. */
+  public int size() throws IOException {
+    IndexSearcher s = searchers.acquire();
+    try {
+      return s.getIndexReader().numDocs();
+    } finally {
+      searchers.release(s);
+    }
+  }
+
+  /** Segment columns that filters may name, lower-cased, sorted. */
+  public Set<String> segments() throws IOException {
+    IndexSearcher s = searchers.acquire();
+    try {
+      Set<String> out = new TreeSet<>();
+      for (LeafReaderContext leaf : s.getIndexReader().leaves()) {
+        for (FieldInfo f : leaf.reader().getFieldInfos()) {
+          if (f.name.startsWith(Fields.SEGMENT)) {
+            out.add(f.name.substring(Fields.SEGMENT.length()));
+          }
+        }
+      }
+      return out;
+    } finally {
+      searchers.release(s);
+    }
+  }
+
+  /**
+   * Runs an analyst's query.
+   *
+   * @param query the query (see {@link AnalystQueryParser} for the language)
+   * @param questions the project's questions in order, for {@code question:N}
+   * @param limit how many hits to return
+   * @throws QuerySyntaxException when the query cannot be read; it gives the column
+   */
+  public SearchResult search(String query, List<String> questions, int limit)
+      throws IOException, QuerySyntaxException {
+    Query q = new AnalystQueryParser(analyzer, segments(), questions).read(query);
+    return run(q, limit);
+  }
+
+  /** Answers like the given one (MoreLikeThis on the stemmed text), the answer itself left out. */
+  public SearchResult similar(long answerId, int limit) throws IOException {
+    IndexSearcher s = searchers.acquire();
+    try {
+      TopDocs own = s.search(new TermQuery(new Term(ID_KEY, Long.toString(answerId))), 1);
+      if (own.scoreDocs.length == 0) {
+        return new SearchResult(0, Map.of(), List.of());
+      }
+      MoreLikeThis mlt = new MoreLikeThis(s.getIndexReader());
+      mlt.setAnalyzer(analyzer);
+      mlt.setFieldNames(new String[] {Fields.TEXT});
+      mlt.setMinTermFreq(1);
+      mlt.setMinDocFreq(2);
+      mlt.setMinWordLen(3);
+      Query like = mlt.like(own.scoreDocs[0].doc);
+      Query others =
+          new BooleanQuery.Builder()
+              .add(like, BooleanClause.Occur.MUST)
+              .add(
+                  new TermQuery(new Term(ID_KEY, Long.toString(answerId))),
+                  BooleanClause.Occur.MUST_NOT)
+              .build();
+      return run(others, limit);
+    } finally {
+      searchers.release(s);
+    }
+  }
+
+  private SearchResult run(Query q, int limit) throws IOException {
+    IndexSearcher s = searchers.acquire();
+    try {
+      WaveCounter counter = s.search(q, WaveCounter.MANAGER);
+      TopDocs top = s.search(q, Math.max(1, limit));
+      List<List<SearchHit.Stretch>> marks = Highlights.of(s, analyzer, q, top);
+      StoredFields stored = s.storedFields();
+      List<SearchHit> hits = new ArrayList<>();
+      for (int i = 0; i < top.scoreDocs.length && i < limit; i++) {
+        ScoreDoc sd = top.scoreDocs[i];
+        Document d = stored.document(sd.doc);
+        hits.add(
+            new SearchHit(
+                d.getField(Fields.ID).numericValue().longValue(),
+                d.get(Fields.RESPONDENT),
+                d.get(Fields.WAVE),
+                d.get(Fields.QUESTION + ".text"),
+                d.get(Fields.TEXT),
+                marks.get(i),
+                sd.score));
+      }
+      return new SearchResult(counter.total, counter.waves(), hits);
+    } finally {
+      searchers.release(s);
+    }
+  }
+
+  /** Counts matches per wave from the wave's doc values. */
+  private static final class WaveCounter extends SimpleCollector {
+    static final CollectorManager<WaveCounter, WaveCounter> MANAGER =
+        new CollectorManager<>() {
+          @Override
+          public WaveCounter newCollector() {
+            return new WaveCounter();
+          }
+
+          @Override
+          public WaveCounter reduce(Collection<WaveCounter> parts) {
+            WaveCounter all = new WaveCounter();
+            for (WaveCounter part : parts) {
+              all.total += part.total;
+              part.counts.forEach((wave, n) -> all.counts.merge(wave, n, Integer::sum));
+            }
+            return all;
+          }
+        };
+
+    final Map<String, Integer> counts = new LinkedHashMap<>();
+    int total;
+    private SortedDocValues waves;
+
+    @Override
+    protected void doSetNextReader(LeafReaderContext context) throws IOException {
+      waves = context.reader().getSortedDocValues(Fields.WAVE);
+    }
+
+    @Override
+    public void collect(int doc) throws IOException {
+      total++;
+      if (waves != null && waves.advanceExact(doc)) {
+        counts.merge(waves.lookupOrd(waves.ordValue()).utf8ToString(), 1, Integer::sum);
+      }
+    }
+
+    @Override
+    public ScoreMode scoreMode() {
+      return ScoreMode.COMPLETE_NO_SCORES;
+    }
+
+    Map<String, Integer> waves() {
+      return counts;
+    }
+  }
+
+  /** The folder the index lives in. */
+  public Path folder() {
+    return folder;
+  }
+
+  @Override
+  public void close() {
+    try {
+      searchers.close();
+      writer.close();
+      directory.close();
+    } catch (IOException e) {
+      throw new UncheckedIOException("cannot close the index in " + folder, e);
+    }
+  }
+}

@@ -1,0 +1,85 @@
+package riffle.store;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Reads answers with everything the index and the miners need, in a few set queries. */
+final class AnswerRows {
+  private AnswerRows() {}
+
+  static List<ProjectStore.AnswerRow> all(Connection c, long afterId) throws SQLException {
+    Map<Long, List<String>> codes = new HashMap<>();
+    try (PreparedStatement ps =
+        c.prepareStatement(
+            "SELECT s.answer_id, k.name FROM assignment s JOIN code k ON k.id = s.code_id"
+                + " WHERE s.answer_id > ? ORDER BY s.answer_id, k.position")) {
+      ps.setLong(1, afterId);
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          codes.computeIfAbsent(rs.getLong(1), k -> new ArrayList<>()).add(rs.getString(2));
+        }
+      }
+    }
+    Map<Long, Map<String, String>> meta = new HashMap<>();
+    try (Statement s = c.createStatement();
+        ResultSet rs =
+            s.executeQuery("SELECT respondent_id, key, value FROM respondent_meta ORDER BY 1")) {
+      while (rs.next()) {
+        meta.computeIfAbsent(rs.getLong(1), k -> new LinkedHashMap<>())
+            .put(rs.getString(2), rs.getString(3));
+      }
+    }
+    List<ProjectStore.AnswerRow> out = new ArrayList<>();
+    try (PreparedStatement ps =
+        c.prepareStatement(
+            "SELECT a.id, r.id, r.external_id, w.name, q.text, coalesce(a.masked, a.normalized),"
+                + " a.substantive, a.normalized FROM answer a"
+                + " JOIN respondent r ON r.id = a.respondent_id"
+                + " JOIN wave w ON w.id = r.wave_id"
+                + " JOIN question q ON q.id = a.question_id"
+                + " WHERE a.id > ? ORDER BY a.id")) {
+      ps.setLong(1, afterId);
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          long id = rs.getLong(1);
+          out.add(
+              new ProjectStore.AnswerRow(
+                  id,
+                  rs.getString(3),
+                  rs.getString(4),
+                  rs.getString(5),
+                  rs.getString(6),
+                  rs.getString(8),
+                  rs.getInt(7) == 1,
+                  codes.getOrDefault(id, List.of()),
+                  meta.getOrDefault(rs.getLong(2), Map.of())));
+        }
+      }
+    }
+    return out;
+  }
+
+  /**
+   * A fingerprint of what derived indexes are built from. Every change to answers, codes and
+   * assignments writes the audit log, so the newest answer and audit ids tell whether anything
+   * changed; both are primary-key maxima, read in constant time.
+   */
+  static String stamp(Connection c) throws SQLException {
+    try (Statement s = c.createStatement();
+        ResultSet rs =
+            s.executeQuery(
+                "SELECT (SELECT coalesce(max(id), 0) FROM answer),"
+                    + " (SELECT coalesce(max(id), 0) FROM audit)")) {
+      rs.next();
+      return "last-answer=" + rs.getLong(1) + ";last-change=" + rs.getLong(2);
+    }
+  }
+}
