@@ -41,7 +41,7 @@ final class AnswerRows {
     try (PreparedStatement ps =
         c.prepareStatement(
             "SELECT a.id, r.id, r.external_id, w.name, q.text, coalesce(a.masked, a.normalized),"
-                + " a.substantive, a.normalized FROM answer a"
+                + " a.substantive, a.normalized, a.foreign_language FROM answer a"
                 + " JOIN respondent r ON r.id = a.respondent_id"
                 + " JOIN wave w ON w.id = r.wave_id"
                 + " JOIN question q ON q.id = a.question_id"
@@ -59,6 +59,7 @@ final class AnswerRows {
                   rs.getString(6),
                   rs.getString(8),
                   rs.getInt(7) == 1,
+                  rs.getInt(9) == 1,
                   codes.getOrDefault(id, List.of()),
                   meta.getOrDefault(rs.getLong(2), Map.of())));
         }

@@ -285,6 +285,7 @@ public final class ProjectStore implements AutoCloseable {
    * @param masked the masked text (the NFC text before its first analysis)
    * @param normalized the NFC text
    * @param substantive false for non-answers
+   * @param foreign true when it is not in the analysis language
    * @param codes names of its codes, in codebook order
    * @param segments the respondent's segment values
    */
@@ -296,6 +297,7 @@ public final class ProjectStore implements AutoCloseable {
       String masked,
       String normalized,
       boolean substantive,
+      boolean foreign,
       List<String> codes,
       Map<String, String> segments) {}
 
