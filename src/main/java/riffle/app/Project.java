@@ -125,6 +125,16 @@ public final class Project implements AutoCloseable {
     }
   }
 
+  /**
+   * Recurring phrases, the themes that travel together and, with {@link PhraseQuery#against}, the
+   * phrases that rose or fell between two waves.
+   *
+   * @throws IllegalArgumentException when the query names a wave or question the project lacks
+   */
+  public PhraseFindings phrases(PhraseQuery query) throws InputException {
+    return PhraseMining.run(store, query);
+  }
+
   /** Answers like the given one, most alike first. */
   public SearchResult similar(long answerId, int limit) throws InputException {
     try {

@@ -8,12 +8,16 @@ import com.fasterxml.jackson.databind.PropertyNamingStrategies;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.SerializerProvider;
 import com.fasterxml.jackson.databind.module.SimpleModule;
+import com.fasterxml.jackson.datatype.jdk8.Jdk8Module;
 import com.fasterxml.jackson.datatype.jsr310.JavaTimeModule;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.Locale;
 
-/** The one JSON style of the command line: snake_case keys, ISO dates, lower-case enum values. */
+/**
+ * The one JSON style of the command line: snake_case keys, ISO dates, lower-case enum values, and
+ * an absent optional value as null.
+ */
 final class Json {
   static final ObjectMapper MAPPER = mapper();
 
@@ -33,6 +37,7 @@ final class Json {
         });
     return new ObjectMapper()
         .registerModule(new JavaTimeModule())
+        .registerModule(new Jdk8Module())
         .registerModule(enums)
         .setPropertyNamingStrategy(PropertyNamingStrategies.SNAKE_CASE)
         .disable(SerializationFeature.WRITE_DATES_AS_TIMESTAMPS)

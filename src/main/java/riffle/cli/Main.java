@@ -21,6 +21,7 @@ import picocli.CommandLine.Spec;
       InfoCommand.class,
       AnalyzeCommand.class,
       SearchCommand.class,
+      PhrasesCommand.class,
       DemoCommand.class,
       CommandLine.HelpCommand.class
     })

@@ -1,0 +1,107 @@
+package riffle.app;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import riffle.model.Analysis;
+import riffle.model.KeyPhrase;
+import riffle.model.PhraseReport;
+import riffle.model.WaveSummary;
+import riffle.phrases.PhraseDoc;
+import riffle.phrases.PhraseFilter;
+import riffle.phrases.PhraseMiner;
+import riffle.phrases.PhraseSettings;
+import riffle.store.AnalysisCache;
+import riffle.store.ProjectFileException;
+import riffle.store.ProjectStore;
+
+/** Mines a project's answers for phrases: loads only the waves and question asked for. */
+final class PhraseMining {
+  private PhraseMining() {}
+
+  static PhraseFindings run(ProjectStore store, PhraseQuery q) throws ProjectFileException {
+    List<String> waves = store.summary().waves().stream().map(WaveSummary::name).toList();
+    Optional<String> wave = q.wave().map(w -> known(w, waves, "--wave"));
+    Optional<String> against = q.against().map(w -> known(w, waves, "--against"));
+    List<String> questions = store.questions();
+    Optional<String> question = q.question().map(x -> question(x, questions));
+
+    PhraseFilter focus = PhraseFilter.all();
+    if (wave.isPresent()) {
+      focus = focus.withWave(wave.get());
+    }
+    if (question.isPresent()) {
+      focus = focus.withQuestion(question.get());
+    }
+    for (Map.Entry<String, String> s : q.segments().entrySet()) {
+      focus = focus.withSegment(s.getKey(), s.getValue());
+    }
+    List<PhraseDoc> docs = new ArrayList<>();
+    try (AnalysisCache cache = AnalysisCache.open(store.file())) {
+      for (ProjectStore.AnswerRow r : store.answerRows(0)) {
+        boolean wanted =
+            (wave.isEmpty() || r.wave().equals(wave.get()) || r.wave().equals(against.orElse(null)))
+                && (question.isEmpty() || r.question().equals(question.get()));
+        if (!wanted || !r.substantive()) {
+          continue;
+        }
+        Analysis analysis =
+            new Analysis(
+                r.foreign() ? "und" : "eng",
+                r.foreign(),
+                r.masked(),
+                List.of(),
+                r.foreign()
+                    ? List.of()
+                    : Analyses.sentences(cache, r.id(), r.masked(), r.normalized()),
+                false);
+        docs.add(
+            new PhraseDoc(r.id(), r.respondent(), r.wave(), r.question(), r.segments(), analysis));
+      }
+    }
+    PhraseMiner miner = PhraseMiner.create(PhraseSettings.builder().limit(q.limit()).get());
+    PhraseReport report = miner.mine(docs, focus);
+    List<KeyPhrase> keyness =
+        against.isPresent() ? miner.keyness(docs, focus, focus.withWave(against.get())) : List.of();
+    return new PhraseFindings(
+        report.answers(), wave, question, against, report.phrases(), report.clusters(), keyness);
+  }
+
+  private static String known(String wave, List<String> waves, String option) {
+    for (String w : waves) {
+      if (w.equalsIgnoreCase(wave.strip())) {
+        return w;
+      }
+    }
+    throw new IllegalArgumentException(
+        "no wave named \""
+            + wave
+            + "\" ("
+            + option
+            + "); the waves are "
+            + String.join(", ", waves));
+  }
+
+  private static String question(String given, List<String> questions) {
+    String q = given.strip();
+    if (q.matches("\\d+")) {
+      int n = Integer.parseInt(q);
+      if (n >= 1 && n <= questions.size()) {
+        return questions.get(n - 1);
+      }
+    }
+    for (String text : questions) {
+      if (text.toLowerCase(Locale.ROOT).equals(q.toLowerCase(Locale.ROOT))) {
+        return text;
+      }
+    }
+    StringBuilder list = new StringBuilder();
+    for (int i = 0; i < questions.size(); i++) {
+      list.append(i == 0 ? "" : "; ").append(i + 1).append(" = ").append(questions.get(i));
+    }
+    throw new IllegalArgumentException(
+        "no question \"" + given + "\" (--question); give its number or text: " + list);
+  }
+}

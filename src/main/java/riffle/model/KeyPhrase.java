@@ -1,0 +1,31 @@
+package riffle.model;
+
+import java.util.Objects;
+
+/**
+ * A phrase whose frequency differs between a focus and a reference (two waves, or a segment and the
+ * rest).
+ *
+ * @param phrase the phrase's label (as in {@link Phrase#phrase()})
+ * @param focus answers of the focus that contain it
+ * @param reference answers of the reference that contain it
+ * @param logLikelihood Dunning's G² of the 2×2 table (contains it or not, focus or reference)
+ * @param logRatio Hardie's Log Ratio: log2 of the ratio of the shares of answers containing it (1:
+ *     twice the share in the focus; a zero count taken as 0.5)
+ * @param p the p-value of the log-likelihood (chi-square, one degree of freedom)
+ * @param direction "more" when its share is at least as high in the focus, else "less"
+ */
+public record KeyPhrase(
+    String phrase,
+    int focus,
+    int reference,
+    double logLikelihood,
+    double logRatio,
+    double p,
+    String direction) {
+  /** Checks the components. */
+  public KeyPhrase {
+    Objects.requireNonNull(phrase, "phrase");
+    Objects.requireNonNull(direction, "direction");
+  }
+}

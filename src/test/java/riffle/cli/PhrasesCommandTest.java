@@ -1,0 +1,77 @@
+package riffle.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Path;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code riffle phrases} on the demo project, through the real command line. */
+class PhrasesCommandTest {
+  @TempDir static Path dir;
+  static String project;
+
+  @BeforeAll
+  static void demo() {
+    CliTest.Run run = CliTest.riffle("demo", "--dir", dir.toString(), "--json");
+    assertEquals(0, run.code(), run.err());
+    project = dir.resolve("demo.riffle").toString();
+  }
+
+  @Test
+  void givesPhrasesAndClustersWithTheFixedKeys() throws Exception {
+    CliTest.Run run =
+        CliTest.riffle(
+            "phrases", "--project", project, "--question", "2", "--limit", "10", "--json");
+    assertEquals(0, run.code(), run.err());
+    JsonNode json = run.json();
+    assertEquals(10, json.get("phrases").size());
+    JsonNode first = json.get("phrases").get(0);
+    for (String key : new String[] {"phrase", "answers", "score", "variants", "examples"}) {
+      assertTrue(first.has(key), key);
+    }
+    assertTrue(first.get("answers").asInt() >= 3);
+    String example = first.get("examples").get(0).get("text").asText();
+    assertTrue(!example.contains("@example."), "examples are masked: " + example);
+    assertTrue(json.get("clusters").size() > 0, "themes that travel together");
+    JsonNode cluster = json.get("clusters").get(0);
+    assertTrue(cluster.has("phrases") && cluster.has("answers") && cluster.has("query"));
+  }
+
+  @Test
+  void showsTheSiteChangeAsAFallInWaveThree() throws Exception {
+    JsonNode keyness =
+        CliTest.riffle(
+                "phrases",
+                "--project",
+                project,
+                "--question",
+                "1",
+                "--wave",
+                "Wave 3",
+                "--against",
+                "Wave 2",
+                "--json")
+            .json()
+            .get("keyness");
+    boolean fell = false;
+    for (JsonNode k : keyness) {
+      if (k.get("phrase").asText().toLowerCase(java.util.Locale.ROOT).contains("arrive")
+          && k.get("direction").asText().equals("less")
+          && k.get("p").asDouble() < 0.01) {
+        fell = true;
+      }
+    }
+    assertTrue(fell, "a delivery-date phrase falls in Wave 3: " + keyness);
+  }
+
+  @Test
+  void anUnknownQuestionExitsTwoAndListsThem() {
+    CliTest.Run run = CliTest.riffle("phrases", "--project", project, "--question", "7");
+    assertEquals(2, run.code());
+    assertTrue(run.err().contains("1 = What almost stopped you from ordering?"), run.err());
+  }
+}
