@@ -2,8 +2,12 @@ package riffle.app;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.Progress;
@@ -64,6 +68,29 @@ public final class Analyses {
         List.of(new AnalysisCache.Entry(answerId, AnalysisCodec.encode(fresh))),
         AnalysisCodec.VERSION);
     return fresh;
+  }
+
+  /**
+   * The sentences of many answers, read from the cache in one pass; answers whose entry is missing,
+   * stale or damaged are analysed afresh and cached again.
+   */
+  static Map<Long, List<Sentence>> sentences(AnalysisCache cache, List<ProjectStore.AnswerRow> rows)
+      throws ProjectFileException {
+    Set<Long> ids = new HashSet<>();
+    rows.forEach(r -> ids.add(r.id()));
+    Map<Long, byte[]> cached = cache.getAll(ids, AnalysisCodec.VERSION);
+    Map<Long, List<Sentence>> out = new HashMap<>(rows.size() * 2);
+    for (ProjectStore.AnswerRow r : rows) {
+      byte[] bytes = cached.get(r.id());
+      Optional<List<Sentence>> decoded =
+          bytes == null ? Optional.empty() : AnalysisCodec.decode(r.masked(), bytes);
+      out.put(
+          r.id(),
+          decoded.isPresent()
+              ? decoded.get()
+              : sentences(cache, r.id(), r.masked(), r.normalized()));
+    }
+    return out;
   }
 
   /** Writes the parses of newly stored answers to the derived cache. */

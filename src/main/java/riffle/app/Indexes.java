@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import riffle.index.AnswerIndex;
 import riffle.index.IndexedAnswer;
@@ -98,9 +99,10 @@ final class Indexes {
     List<ProjectStore.AnswerRow> rows = store.answerRows(afterId);
     List<IndexedAnswer> out = new ArrayList<>(rows.size());
     try (AnalysisCache cache = AnalysisCache.open(store.file())) {
+      Map<Long, List<Sentence>> sentences = Analyses.sentences(cache, rows);
       for (ProjectStore.AnswerRow r : rows) {
         List<String> chunks = new ArrayList<>();
-        for (Sentence s : Analyses.sentences(cache, r.id(), r.masked(), r.normalized())) {
+        for (Sentence s : sentences.get(r.id())) {
           for (Chunk c : s.chunks()) {
             chunks.add(c.text());
           }

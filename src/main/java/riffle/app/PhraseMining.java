@@ -8,6 +8,7 @@ import java.util.Optional;
 import riffle.model.Analysis;
 import riffle.model.KeyPhrase;
 import riffle.model.PhraseReport;
+import riffle.model.Sentence;
 import riffle.model.WaveSummary;
 import riffle.phrases.PhraseDoc;
 import riffle.phrases.PhraseFilter;
@@ -38,24 +39,26 @@ final class PhraseMining {
     for (Map.Entry<String, String> s : q.segments().entrySet()) {
       focus = focus.withSegment(s.getKey(), s.getValue());
     }
-    List<PhraseDoc> docs = new ArrayList<>();
+    List<String> waveNames = new ArrayList<>();
+    wave.ifPresent(waveNames::add);
+    against.ifPresent(waveNames::add);
+    List<ProjectStore.AnswerRow> rows = new ArrayList<>();
+    for (ProjectStore.AnswerRow r : store.answerRows(waveNames, question)) {
+      if (r.substantive()) {
+        rows.add(r);
+      }
+    }
+    List<PhraseDoc> docs = new ArrayList<>(rows.size());
     try (AnalysisCache cache = AnalysisCache.open(store.file())) {
-      for (ProjectStore.AnswerRow r : store.answerRows(0)) {
-        boolean wanted =
-            (wave.isEmpty() || r.wave().equals(wave.get()) || r.wave().equals(against.orElse(null)))
-                && (question.isEmpty() || r.question().equals(question.get()));
-        if (!wanted || !r.substantive()) {
-          continue;
-        }
+      Map<Long, List<Sentence>> sentences = Analyses.sentences(cache, rows);
+      for (ProjectStore.AnswerRow r : rows) {
         Analysis analysis =
             new Analysis(
                 r.foreign() ? "und" : "eng",
                 r.foreign(),
                 r.masked(),
                 List.of(),
-                r.foreign()
-                    ? List.of()
-                    : Analyses.sentences(cache, r.id(), r.masked(), r.normalized()),
+                r.foreign() ? List.of() : sentences.get(r.id()),
                 false);
         docs.add(
             new PhraseDoc(r.id(), r.respondent(), r.wave(), r.question(), r.segments(), analysis));

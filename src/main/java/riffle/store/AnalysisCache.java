@@ -9,9 +9,12 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Properties;
+import java.util.Set;
 
 /**
  * The derived analysis cache beside a project ({@code NAME.riffle.d/analysis.db}): each answer's
@@ -122,6 +125,29 @@ public final class AnalysisCache implements AutoCloseable {
     } catch (SQLException e) {
       throw new ProjectFileException("cannot read the analysis cache: " + e.getMessage(), e);
     }
+  }
+
+  /**
+   * The cached parses of many answers at once (one pass over the cache), by answer id; answers
+   * without a parse from {@code version} are left out.
+   */
+  public Map<Long, byte[]> getAll(Set<Long> answerIds, String version) throws ProjectFileException {
+    Map<Long, byte[]> out = new HashMap<>(answerIds.size() * 2);
+    try (PreparedStatement ps =
+        connection.prepareStatement("SELECT answer_id, data FROM analysis WHERE version = ?")) {
+      ps.setString(1, version);
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          long id = rs.getLong(1);
+          if (answerIds.contains(id)) {
+            out.put(id, rs.getBytes(2));
+          }
+        }
+      }
+    } catch (SQLException e) {
+      throw new ProjectFileException("cannot read the analysis cache: " + e.getMessage(), e);
+    }
+    return out;
   }
 
   /** How many answers have a parse from {@code version}. */

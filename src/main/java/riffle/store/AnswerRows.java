@@ -16,6 +16,17 @@ final class AnswerRows {
   private AnswerRows() {}
 
   static List<ProjectStore.AnswerRow> all(Connection c, long afterId) throws SQLException {
+    return select(c, afterId, List.of(), null);
+  }
+
+  /**
+   * Answers after {@code afterId}, only of {@code waves} (all when empty) and of {@code question}
+   * (all when null).
+   */
+  static List<ProjectStore.AnswerRow> select(
+      Connection c, long afterId, List<String> waves, String question) throws SQLException {
+    String waveFilter =
+        waves.isEmpty() ? "" : " AND w.name IN (" + "?,".repeat(waves.size() - 1) + "?)";
     Map<Long, List<String>> codes = new HashMap<>();
     try (PreparedStatement ps =
         c.prepareStatement(
@@ -29,12 +40,21 @@ final class AnswerRows {
       }
     }
     Map<Long, Map<String, String>> meta = new HashMap<>();
-    try (Statement s = c.createStatement();
-        ResultSet rs =
-            s.executeQuery("SELECT respondent_id, key, value FROM respondent_meta ORDER BY 1")) {
-      while (rs.next()) {
-        meta.computeIfAbsent(rs.getLong(1), k -> new LinkedHashMap<>())
-            .put(rs.getString(2), rs.getString(3));
+    try (PreparedStatement ps =
+        c.prepareStatement(
+            "SELECT m.respondent_id, m.key, m.value FROM respondent_meta m"
+                + " JOIN respondent r ON r.id = m.respondent_id JOIN wave w ON w.id = r.wave_id"
+                + " WHERE 1 = 1"
+                + waveFilter
+                + " ORDER BY 1")) {
+      for (int i = 0; i < waves.size(); i++) {
+        ps.setString(i + 1, waves.get(i));
+      }
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          meta.computeIfAbsent(rs.getLong(1), k -> new LinkedHashMap<>())
+              .put(rs.getString(2), rs.getString(3));
+        }
       }
     }
     List<ProjectStore.AnswerRow> out = new ArrayList<>();
@@ -45,8 +65,18 @@ final class AnswerRows {
                 + " JOIN respondent r ON r.id = a.respondent_id"
                 + " JOIN wave w ON w.id = r.wave_id"
                 + " JOIN question q ON q.id = a.question_id"
-                + " WHERE a.id > ? ORDER BY a.id")) {
-      ps.setLong(1, afterId);
+                + " WHERE a.id > ?"
+                + waveFilter
+                + (question == null ? "" : " AND q.text = ?")
+                + " ORDER BY a.id")) {
+      int at = 1;
+      ps.setLong(at++, afterId);
+      for (String w : waves) {
+        ps.setString(at++, w);
+      }
+      if (question != null) {
+        ps.setString(at, question);
+      }
       try (ResultSet rs = ps.executeQuery()) {
         while (rs.next()) {
           long id = rs.getLong(1);

@@ -333,6 +333,12 @@ public final class ProjectStore implements AutoCloseable {
         });
   }
 
+  /** Answers of some waves (all when empty) and one question (all when empty), in id order. */
+  public List<AnswerRow> answerRows(List<String> waves, Optional<String> question)
+      throws ProjectFileException {
+    return read(c -> AnswerRows.select(c, 0, waves, question.orElse(null)));
+  }
+
   /** A fingerprint that changes whenever answers, assignments or the audit log change. */
   public String contentStamp() throws ProjectFileException {
     return read(AnswerRows::stamp);

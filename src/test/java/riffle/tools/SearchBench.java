@@ -5,9 +5,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collections;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Random;
+import java.util.stream.Stream;
 import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
 import riffle.app.Project;
@@ -72,6 +74,12 @@ public final class SearchBench {
           ms.get(ms.size() / 2),
           ms.get((int) (ms.size() * 0.95)),
           ms.get(ms.size() - 1));
+    } finally {
+      try (Stream<Path> files = Files.walk(dir)) {
+        for (Path f : files.sorted(Comparator.reverseOrder()).toList()) {
+          Files.deleteIfExists(f);
+        }
+      }
     }
   }
 }
