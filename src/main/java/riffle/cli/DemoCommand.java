@@ -61,7 +61,12 @@ final class DemoCommand implements Callable<Integer>, JsonCommand {
       }
     }
     Summaries.print(out, result.project(), result.summary());
-    out.printf(Locale.ROOT, "%nNext: riffle info --project %s%n", result.project());
+    out.printf(
+        Locale.ROOT,
+        "%nTry:%n  riffle phrases --project %1$s --question 1%n"
+            + "  riffle phrases --project %1$s --question 1 --wave \"Wave 3\" --against \"Wave 2\"%n"
+            + "  riffle search --project %1$s --query '\"delivery date\" AND wave:\"Wave 3\"'%n",
+        result.project());
     return 0;
   }
 }
