@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import riffle.text.NegationCues;
 
 /**
  * The word lists of the phrase rules and the vocabulary of one mining run: stems are interned into
@@ -17,8 +18,8 @@ import java.util.Set;
  * fillers of survey answers (very, really, just, tbh, honestly …). Content words such as "less",
  * "like", "new" or "again" are not stopwords ("less waste", "like new").
  *
- * <p><b>Negation cues</b> ({@link #NEGATION_CUES}) follow the text package's negation rule: not,
- * n't, never, no, without, hardly, nothing, nobody, none, nor, neither, cannot and the forms typed
+ * <p><b>Negation cues</b> ({@link NegationCues}) follow the text package's negation rule: not, n't,
+ * never, no, without, hardly, nothing, nobody, none, nor, neither, cannot and the forms typed
  * without an apostrophe (didnt, wasnt, dont …). A cue is never part of a phrase's words; it only
  * shows in the label of the negated phrase that follows it.
  */
@@ -26,43 +27,6 @@ final class Words {
   static final int WORD = 1;
   static final int STOP = 2;
   static final int CUE = 4;
-
-  static final Set<String> NEGATION_CUES =
-      words(
-          "not",
-          "n't",
-          "'nt",
-          "never",
-          "no",
-          "without",
-          "hardly",
-          "nothing",
-          "nobody",
-          "none",
-          "nor",
-          "neither",
-          "cannot",
-          "noone",
-          "no-one",
-          "didnt",
-          "doesnt",
-          "dont",
-          "isnt",
-          "wasnt",
-          "arent",
-          "werent",
-          "havent",
-          "hasnt",
-          "hadnt",
-          "cant",
-          "couldnt",
-          "wouldnt",
-          "shouldnt",
-          "wont",
-          "aint",
-          "mustnt",
-          "neednt",
-          "shant");
 
   static final Set<String> STOPWORDS =
       words(
@@ -354,7 +318,7 @@ final class Words {
     }
     String lower = normalise(text);
     int f = WORD;
-    if (NEGATION_CUES.contains(lower) || lower.endsWith("n't")) {
+    if (NegationCues.listed(lower) || lower.endsWith("n't")) {
       f |= CUE | STOP;
     } else if (STOPWORDS.contains(lower)) {
       f |= STOP;

@@ -97,32 +97,9 @@ import java.util.Set;
  */
 final class NegationScope {
 
-  private static final Set<String> CUES =
-      Set.of(
-          "not", "n't", "'nt", "never", "no", "without", "hardly", "nothing", "nobody", "none",
-          "nor", "neither", "cannot", "noone", "no-one");
+  private static final Set<String> CUES = NegationCues.WORDS;
 
-  private static final Set<String> APOSTROPHE_LESS =
-      Set.of(
-          "didnt",
-          "doesnt",
-          "dont",
-          "isnt",
-          "wasnt",
-          "arent",
-          "werent",
-          "havent",
-          "hasnt",
-          "hadnt",
-          "cant",
-          "couldnt",
-          "wouldnt",
-          "shouldnt",
-          "wont",
-          "aint",
-          "mustnt",
-          "neednt",
-          "shant");
+  private static final Set<String> APOSTROPHE_LESS = NegationCues.APOSTROPHE_LESS;
 
   private static final Set<String> ADDITIVE = Set.of("only", "just", "merely");
 
