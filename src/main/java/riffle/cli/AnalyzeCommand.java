@@ -23,18 +23,13 @@ import riffle.model.Token;
       "Shows what Riffle's text analysis makes of one answer: masked personal data, language,",
       "sentences, tokens with Penn Treebank tags, stems and negation, and chunks."
     })
-final class AnalyzeCommand implements Callable<Integer>, JsonCommand {
+final class AnalyzeCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @Option(names = "--text", required = true, paramLabel = "T", description = "The answer.")
   String text;
 
   @Mixin JsonOption json;
-
-  @Override
-  public boolean json() {
-    return json.enabled;
-  }
 
   @Override
   public Integer call() {

@@ -21,7 +21,7 @@ import riffle.app.ImportReport;
       "Builds the demo project from the bundled sample waves (an invented shop's buyer survey)",
       "in a working folder outside the repository, reusing it on later runs."
     })
-final class DemoCommand implements Callable<Integer>, JsonCommand {
+final class DemoCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @Option(
@@ -31,11 +31,6 @@ final class DemoCommand implements Callable<Integer>, JsonCommand {
   Path dir;
 
   @Mixin JsonOption json;
-
-  @Override
-  public boolean json() {
-    return json.enabled;
-  }
 
   @Override
   public Integer call() throws IOException {

@@ -34,7 +34,7 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
       ex.printStackTrace(err);
     }
     err.flush();
-    if (cl.getCommand() instanceof JsonCommand command && command.json()) {
+    if (cl.getParseResult().hasMatchedOption("--json")) {
       Map<String, Object> error = new LinkedHashMap<>();
       error.put("message", message);
       if (ex instanceof InputException input && input.located().isPresent()) {

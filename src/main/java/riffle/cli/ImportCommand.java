@@ -32,7 +32,7 @@ import riffle.model.InputProblem;
       "Encoding, delimiter and column roles are detected unless named. Importing the same rows",
       "into the same wave again adds nothing. An unusable file changes nothing and exits 2."
     })
-final class ImportCommand implements Callable<Integer>, JsonCommand {
+final class ImportCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @ParentCommand Main main;
@@ -121,11 +121,6 @@ final class ImportCommand implements Callable<Integer>, JsonCommand {
   long maxMb;
 
   @Mixin JsonOption json;
-
-  @Override
-  public boolean json() {
-    return json.enabled;
-  }
 
   @Override
   public Integer call() throws IOException {

@@ -17,18 +17,13 @@ import riffle.model.ProjectSummary;
     name = "info",
     mixinStandardHelpOptions = true,
     description = "Shows a project's waves, questions, answers, codes and assignments.")
-final class InfoCommand implements Callable<Integer>, JsonCommand {
+final class InfoCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @Option(names = "--project", required = true, paramLabel = "P", description = "Project file.")
   Path project;
 
   @Mixin JsonOption json;
-
-  @Override
-  public boolean json() {
-    return json.enabled;
-  }
 
   @Override
   public Integer call() throws InputException {

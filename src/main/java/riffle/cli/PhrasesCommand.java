@@ -29,7 +29,7 @@ import riffle.model.PhraseCluster;
       "the themes that travel together as candidate codes with a ready search query, and, with",
       "--against, the phrases that rose or fell between two waves (log-likelihood, Log Ratio)."
     })
-final class PhrasesCommand implements Callable<Integer>, JsonCommand {
+final class PhrasesCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @Option(names = "--project", required = true, paramLabel = "P", description = "Project file.")
@@ -64,11 +64,6 @@ final class PhrasesCommand implements Callable<Integer>, JsonCommand {
   int limit;
 
   @Mixin JsonOption json;
-
-  @Override
-  public boolean json() {
-    return json.enabled;
-  }
 
   @Override
   public Integer call() throws InputException {

@@ -25,7 +25,7 @@ import riffle.model.SearchResult;
       "NOT, parentheses, and filters wave:, question:N, code:, is:uncoded and any segment",
       "column (device:mobile). Shows the masked answers with the matched words marked."
     })
-final class SearchCommand implements Callable<Integer>, JsonCommand {
+final class SearchCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
   @Option(names = "--project", required = true, paramLabel = "P", description = "Project file.")
@@ -53,11 +53,6 @@ final class SearchCommand implements Callable<Integer>, JsonCommand {
   int limit;
 
   @Mixin JsonOption json;
-
-  @Override
-  public boolean json() {
-    return json.enabled;
-  }
 
   @Override
   public Integer call() throws InputException {
