@@ -160,17 +160,24 @@ final class WaveImporter {
     List<Column> metas = table.columnsWith(ColumnRole.META);
     List<Column> codes = table.columnsWith(ColumnRole.CODES);
     List<String> ids = new ArrayList<>(table.rows().size());
+    // Per row and question: the NFC text, and whether the wave already holds this very answer.
+    String[][] normalized = new String[table.rows().size()][texts.size()];
+    boolean[][] known = new boolean[table.rows().size()][texts.size()];
     List<String> fresh = new ArrayList<>();
-    for (SurveyRow row : table.rows()) {
+    for (int r = 0; r < table.rows().size(); r++) {
+      SurveyRow row = table.rows().get(r);
       String externalId = id.map(c -> row.cell(c).strip()).orElse("");
       if (externalId.isEmpty()) {
         externalId = "row-" + row.number();
       }
       ids.add(externalId);
-      for (Column t : texts) {
+      for (int q = 0; q < texts.size(); q++) {
+        Column t = texts.get(q);
         String original = row.cell(t);
-        if (!original.equals(stored.get(ProjectStore.answerKey(externalId, t.header())))) {
-          fresh.add(Normalizer.normalize(original, Normalizer.Form.NFC));
+        normalized[r][q] = Normalizer.normalize(original, Normalizer.Form.NFC);
+        known[r][q] = original.equals(stored.get(ProjectStore.answerKey(externalId, t.header())));
+        if (!known[r][q]) {
+          fresh.add(normalized[r][q]);
         }
       }
     }
@@ -191,10 +198,9 @@ final class WaveImporter {
         coderName = DEFAULT_CODER;
       }
       List<NewAnswer> answers = new ArrayList<>(texts.size());
-      for (Column t : texts) {
+      for (int q = 0; q < texts.size(); q++) {
+        Column t = texts.get(q);
         String original = row.cell(t);
-        String normalized = Normalizer.normalize(original, Normalizer.Form.NFC);
-        boolean known = original.equals(stored.get(ProjectStore.answerKey(externalId, t.header())));
         List<String> assigned = new ArrayList<>();
         for (Column c : codes) {
           if (c.answersColumn() == t.index()) {
@@ -205,13 +211,13 @@ final class WaveImporter {
             new NewAnswer(
                 t.header(),
                 original,
-                normalized,
+                normalized[r][q],
                 !NonAnswers.isNonAnswer(original),
                 row.line(),
                 t.index() + 1,
                 assigned,
                 coderName,
-                known ? Analyses.unanalysed(normalized) : analyses.next()));
+                known[r][q] ? Analyses.unanalysed(normalized[r][q]) : analyses.next()));
       }
       out.add(
           new NewRespondent(

@@ -135,10 +135,7 @@ public final class ProjectStore implements AutoCloseable {
   }
 
   static int pragmaInt(Connection c, String pragma) throws SQLException {
-    try (Statement s = c.createStatement();
-        ResultSet rs = s.executeQuery("PRAGMA " + pragma)) {
-      return rs.next() ? rs.getInt(1) : 0;
-    }
+    return Summaries.count(c, "PRAGMA " + pragma);
   }
 
   /** The schema version of the open file. */
@@ -308,29 +305,12 @@ public final class ProjectStore implements AutoCloseable {
 
   /** The newest answer's id, or 0 in an empty project. */
   public long lastAnswerId() throws ProjectFileException {
-    return read(
-        c -> {
-          try (Statement s = c.createStatement();
-              ResultSet rs = s.executeQuery("SELECT coalesce(max(id), 0) FROM answer")) {
-            rs.next();
-            return rs.getLong(1);
-          }
-        });
+    return read(c -> Summaries.number(c, "SELECT coalesce(max(id), 0) FROM answer"));
   }
 
   /** The questions, in the order first seen. */
   public List<String> questions() throws ProjectFileException {
-    return read(
-        c -> {
-          List<String> out = new ArrayList<>();
-          try (Statement s = c.createStatement();
-              ResultSet rs = s.executeQuery("SELECT text FROM question ORDER BY position")) {
-            while (rs.next()) {
-              out.add(rs.getString(1));
-            }
-          }
-          return out;
-        });
+    return read(Summaries::questions);
   }
 
   /** Answers of some waves (all when empty) and one question (all when empty), in id order. */

@@ -39,16 +39,9 @@ final class Summaries {
                 rs.getInt(5)));
       }
     }
-    List<String> questions = new ArrayList<>();
-    try (Statement s = c.createStatement();
-        ResultSet rs = s.executeQuery("SELECT text FROM question ORDER BY position")) {
-      while (rs.next()) {
-        questions.add(rs.getString(1));
-      }
-    }
     return new ProjectSummary(
         waves,
-        questions,
+        questions(c),
         count(c, "SELECT count(*) FROM respondent"),
         count(c, "SELECT count(*) FROM answer"),
         count(c, "SELECT count(*) FROM answer WHERE substantive = 1"),
@@ -56,10 +49,27 @@ final class Summaries {
         count(c, "SELECT count(*) FROM assignment"));
   }
 
+  /** The questions, in the order first seen. */
+  static List<String> questions(Connection c) throws SQLException {
+    List<String> questions = new ArrayList<>();
+    try (Statement s = c.createStatement();
+        ResultSet rs = s.executeQuery("SELECT text FROM question ORDER BY position")) {
+      while (rs.next()) {
+        questions.add(rs.getString(1));
+      }
+    }
+    return questions;
+  }
+
   static int count(Connection c, String sql) throws SQLException {
+    return Math.toIntExact(number(c, sql));
+  }
+
+  /** The single number a query returns, or 0 when it returns no row. */
+  static long number(Connection c, String sql) throws SQLException {
     try (Statement s = c.createStatement();
         ResultSet rs = s.executeQuery(sql)) {
-      return rs.next() ? rs.getInt(1) : 0;
+      return rs.next() ? rs.getLong(1) : 0;
     }
   }
 }
