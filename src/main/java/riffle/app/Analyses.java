@@ -64,9 +64,7 @@ public final class Analyses {
       return cached.get();
     }
     List<Sentence> fresh = analyzer().analyze(normalized).sentences();
-    cache.putAll(
-        List.of(new AnalysisCache.Entry(answerId, AnalysisCodec.encode(fresh))),
-        AnalysisCodec.VERSION);
+    cache.putAll(List.of(entry(answerId, fresh)), AnalysisCodec.VERSION);
     return fresh;
   }
 
@@ -97,9 +95,17 @@ public final class Analyses {
   static void cache(Path project, List<BatchOutcome.Added> added) throws ProjectFileException {
     List<AnalysisCache.Entry> entries = new ArrayList<>(added.size());
     for (BatchOutcome.Added a : added) {
-      entries.add(
-          new AnalysisCache.Entry(a.id(), AnalysisCodec.encode(a.answer().analysis().sentences())));
+      entries.add(entry(a.id(), a.answer().analysis().sentences()));
     }
+    write(project, entries);
+  }
+
+  private static AnalysisCache.Entry entry(long answerId, List<Sentence> sentences) {
+    return new AnalysisCache.Entry(answerId, AnalysisCodec.encode(sentences));
+  }
+
+  private static void write(Path project, List<AnalysisCache.Entry> entries)
+      throws ProjectFileException {
     try (AnalysisCache cache = AnalysisCache.open(project)) {
       cache.putAll(entries, AnalysisCodec.VERSION);
     }
@@ -122,12 +128,10 @@ public final class Analyses {
     for (int i = 0; i < stale.size(); i++) {
       long id = stale.get(i).id();
       rows.add(new ProjectStore.Analysed(id, analyses.get(i)));
-      entries.add(new AnalysisCache.Entry(id, AnalysisCodec.encode(analyses.get(i).sentences())));
+      entries.add(entry(id, analyses.get(i).sentences()));
     }
     store.storeAnalyses(rows, AnalysisCodec.VERSION);
-    try (AnalysisCache cache = AnalysisCache.open(store.file())) {
-      cache.putAll(entries, AnalysisCodec.VERSION);
-    }
+    write(store.file(), entries);
     return stale.size();
   }
 }
