@@ -34,16 +34,13 @@ final class Indexes {
 
   /** Opens the project's index, rebuilding it first when missing, stale or damaged. */
   static AnswerIndex current(ProjectStore store) throws ProjectFileException {
-    String stamp = stamp(store);
     AnswerIndex index = open(store);
     try {
-      if (!index.stamp().equals(Optional.of(stamp))) {
-        index.rebuild(answers(store, 0), stamp);
-      }
+      catchUp(store, index);
       return index;
-    } catch (IOException e) {
+    } catch (ProjectFileException | RuntimeException e) {
       index.close();
-      throw cannot(store, e);
+      throw e;
     }
   }
 
