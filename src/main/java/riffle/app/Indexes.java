@@ -7,6 +7,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import riffle.index.AnswerIndex;
 import riffle.index.IndexedAnswer;
 import riffle.model.Chunk;
@@ -44,16 +46,44 @@ final class Indexes {
     }
   }
 
-  /** Rebuilds an open index when the project changed since it was built. */
+  /**
+   * Brings an open index up to date: when only the coding changed since it was built, the answers
+   * whose codes changed are indexed again; after any other change the index is rebuilt.
+   */
   static void catchUp(ProjectStore store, AnswerIndex index) throws ProjectFileException {
     String stamp = stamp(store);
-    if (!index.stamp().equals(Optional.of(stamp))) {
-      try {
-        index.rebuild(answers(store, 0), stamp);
-      } catch (IOException e) {
-        throw cannot(store, e);
-      }
+    Optional<String> built = index.stamp();
+    if (built.equals(Optional.of(stamp))) {
+      return;
     }
+    try {
+      long since = built.map(b -> codingOnlySince(b, stamp)).orElse(-1L);
+      if (since >= 0) {
+        index.add(answers(store.answerRows(store.answersTouchedSince(since)), store), stamp);
+      } else {
+        index.rebuild(answers(store, 0), stamp);
+      }
+    } catch (IOException e) {
+      throw cannot(store, e);
+    }
+  }
+
+  private static final Pattern EDIT = Pattern.compile(";last-edit=(\\d+);");
+
+  /**
+   * The newest edit the index saw when {@code built} differs from {@code now} only by later edits
+   * (the same versions and answers); otherwise -1.
+   */
+  static long codingOnlySince(String built, String now) {
+    Matcher b = EDIT.matcher(built);
+    Matcher n = EDIT.matcher(now);
+    if (!b.find()
+        || !n.find()
+        || !built.substring(0, b.start()).equals(now.substring(0, n.start()))) {
+      return -1;
+    }
+    long seen = Long.parseLong(b.group(1));
+    return seen <= Long.parseLong(n.group(1)) ? seen : -1;
   }
 
   /**
@@ -93,7 +123,11 @@ final class Indexes {
 
   /** The answers with an id above {@code afterId}, with their chunk phrases from the cache. */
   static List<IndexedAnswer> answers(ProjectStore store, long afterId) throws ProjectFileException {
-    List<ProjectStore.AnswerRow> rows = store.answerRows(afterId);
+    return answers(store.answerRows(afterId), store);
+  }
+
+  private static List<IndexedAnswer> answers(List<ProjectStore.AnswerRow> rows, ProjectStore store)
+      throws ProjectFileException {
     List<IndexedAnswer> out = new ArrayList<>(rows.size());
     try (AnalysisCache cache = AnalysisCache.open(store.file())) {
       Map<Long, List<Sentence>> sentences = Analyses.sentences(cache, rows);

@@ -65,6 +65,9 @@ public final class Project implements AutoCloseable {
       index = null;
     }
     Indexes.afterImport(store, stampBefore, lastBefore);
+    if (!store.rules().isEmpty() && store.lastAnswerId() > lastBefore) {
+      coding().applyRules(request.actor(), java.util.OptionalLong.empty(), lastBefore);
+    }
     return report;
   }
 
@@ -154,8 +157,13 @@ public final class Project implements AutoCloseable {
     return store.summary();
   }
 
+  /** The codebook, the coding and the rules. */
+  public Coding coding() {
+    return new Coding(store, this);
+  }
+
   /** The open index, brought up to date with the project first. */
-  private AnswerIndex index() throws InputException {
+  AnswerIndex index() throws InputException {
     if (index == null) {
       index = Indexes.current(store);
     } else {

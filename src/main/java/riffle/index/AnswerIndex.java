@@ -29,6 +29,7 @@ import org.apache.lucene.index.IndexOptions;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
 import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.index.NumericDocValues;
 import org.apache.lucene.index.SortedDocValues;
 import org.apache.lucene.index.StoredFields;
 import org.apache.lucene.index.Term;
@@ -272,6 +273,78 @@ public final class AnswerIndex implements AutoCloseable {
       return new SearchResult(counter.total, counter.waves(), hits);
     } finally {
       searchers.release(s);
+    }
+  }
+
+  /**
+   * The ids of every answer the query matches, in ascending order (for rules, which code them all).
+   *
+   * @throws QuerySyntaxException when the query cannot be read; it gives the column
+   */
+  public long[] matches(String query, List<String> questions)
+      throws IOException, QuerySyntaxException {
+    Query q = new AnalystQueryParser(analyzer, segments(), questions).read(query);
+    IndexSearcher s = searchers.acquire();
+    try {
+      long[] ids = s.search(q, IdCollector.MANAGER).ids();
+      java.util.Arrays.sort(ids);
+      return ids;
+    } finally {
+      searchers.release(s);
+    }
+  }
+
+  /** Collects answer ids from their doc values. */
+  private static final class IdCollector extends SimpleCollector {
+    static final CollectorManager<IdCollector, IdCollector> MANAGER =
+        new CollectorManager<>() {
+          @Override
+          public IdCollector newCollector() {
+            return new IdCollector();
+          }
+
+          @Override
+          public IdCollector reduce(Collection<IdCollector> parts) {
+            IdCollector all = new IdCollector();
+            for (IdCollector part : parts) {
+              for (int i = 0; i < part.size; i++) {
+                all.add(part.found[i]);
+              }
+            }
+            return all;
+          }
+        };
+
+    private long[] found = new long[64];
+    private int size;
+    private NumericDocValues values;
+
+    @Override
+    protected void doSetNextReader(LeafReaderContext context) throws IOException {
+      values = context.reader().getNumericDocValues(Fields.ID);
+    }
+
+    @Override
+    public void collect(int doc) throws IOException {
+      if (values != null && values.advanceExact(doc)) {
+        add(values.longValue());
+      }
+    }
+
+    private void add(long id) {
+      if (size == found.length) {
+        found = java.util.Arrays.copyOf(found, size * 2);
+      }
+      found[size++] = id;
+    }
+
+    long[] ids() {
+      return java.util.Arrays.copyOf(found, size);
+    }
+
+    @Override
+    public ScoreMode scoreMode() {
+      return ScoreMode.COMPLETE_NO_SCORES;
     }
   }
 

@@ -6,6 +6,7 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -19,19 +20,47 @@ final class AnswerRows {
     return select(c, afterId, List.of(), null);
   }
 
+  /** The given answers, in id order (in groups, to keep each statement small). */
+  static List<ProjectStore.AnswerRow> byIds(Connection c, Collection<Long> ids)
+      throws SQLException {
+    List<Long> sorted = new ArrayList<>(new java.util.TreeSet<>(ids));
+    List<ProjectStore.AnswerRow> out = new ArrayList<>();
+    for (int from = 0; from < sorted.size(); from += 500) {
+      out.addAll(
+          select(c, 0, List.of(), null, sorted.subList(from, Math.min(sorted.size(), from + 500))));
+    }
+    return out;
+  }
+
   /**
    * Answers after {@code afterId}, only of {@code waves} (all when empty) and of {@code question}
    * (all when null).
    */
   static List<ProjectStore.AnswerRow> select(
       Connection c, long afterId, List<String> waves, String question) throws SQLException {
+    return select(c, afterId, waves, question, List.of());
+  }
+
+  private static List<ProjectStore.AnswerRow> select(
+      Connection c, long afterId, List<String> waves, String question, List<Long> ids)
+      throws SQLException {
+    String idFilter =
+        ids.isEmpty()
+            ? ""
+            : " IN ("
+                + ids.stream()
+                    .map(String::valueOf)
+                    .collect(java.util.stream.Collectors.joining(","))
+                + ")";
     String waveFilter =
         waves.isEmpty() ? "" : " AND w.name IN (" + "?,".repeat(waves.size() - 1) + "?)";
     Map<Long, List<String>> codes = new HashMap<>();
     try (PreparedStatement ps =
         c.prepareStatement(
             "SELECT s.answer_id, k.name FROM assignment s JOIN code k ON k.id = s.code_id"
-                + " WHERE s.answer_id > ? ORDER BY s.answer_id, k.position")) {
+                + " WHERE s.answer_id > ?"
+                + (ids.isEmpty() ? "" : " AND s.answer_id" + idFilter)
+                + " ORDER BY s.answer_id, k.position")) {
       ps.setLong(1, afterId);
       try (ResultSet rs = ps.executeQuery()) {
         while (rs.next()) {
@@ -66,6 +95,7 @@ final class AnswerRows {
                 + " JOIN wave w ON w.id = r.wave_id"
                 + " JOIN question q ON q.id = a.question_id"
                 + " WHERE a.id > ?"
+                + (ids.isEmpty() ? "" : " AND a.id" + idFilter)
                 + waveFilter
                 + (question == null ? "" : " AND q.text = ?")
                 + " ORDER BY a.id")) {
@@ -108,9 +138,15 @@ final class AnswerRows {
         ResultSet rs =
             s.executeQuery(
                 "SELECT (SELECT coalesce(max(id), 0) FROM answer),"
-                    + " (SELECT coalesce(max(id), 0) FROM audit)")) {
+                    + " (SELECT coalesce(max(id), 0) FROM audit),"
+                    + " (SELECT coalesce(max(id), 0) FROM edit)")) {
       rs.next();
-      return "last-answer=" + rs.getLong(1) + ";last-change=" + rs.getLong(2);
+      return "last-answer="
+          + rs.getLong(1)
+          + ";last-edit="
+          + rs.getLong(3)
+          + ";last-change="
+          + rs.getLong(2);
     }
   }
 }

@@ -2,10 +2,15 @@ package riffle.store;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;
+import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import riffle.model.HistoryEntry;
 
 /** The audit log: one row per change, with who, when, what, and a JSON object of details. */
 final class Audit {
@@ -61,5 +66,30 @@ final class Audit {
       }
     }
     return sb.append('"');
+  }
+
+  /** The newest rows, newest first. */
+  static List<HistoryEntry> newest(Connection c, int limit) throws SQLException {
+    List<HistoryEntry> out = new ArrayList<>();
+    try (PreparedStatement ps =
+        c.prepareStatement(
+            "SELECT id, at, actor, action, detail FROM audit ORDER BY id DESC LIMIT ?")) {
+      ps.setInt(1, limit);
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          Map<String, Object> detail = new LinkedHashMap<>();
+          RowImages.image(rs.getString(5))
+              .ifPresent(m -> m.forEach((k, v) -> detail.put(k, v == null ? "" : v)));
+          out.add(
+              new HistoryEntry(
+                  rs.getLong(1),
+                  Instant.parse(rs.getString(2)),
+                  rs.getString(3),
+                  rs.getString(4),
+                  detail));
+        }
+      }
+    }
+    return out;
   }
 }

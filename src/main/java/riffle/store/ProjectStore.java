@@ -10,18 +10,25 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Properties;
+import java.util.Set;
 import org.sqlite.SQLiteErrorCode;
 import org.sqlite.SQLiteException;
 import riffle.model.Analysis;
+import riffle.model.Assignment;
 import riffle.model.BatchOutcome;
+import riffle.model.Code;
+import riffle.model.EditOutcome;
+import riffle.model.HistoryEntry;
 import riffle.model.PiiMask;
 import riffle.model.Progress;
 import riffle.model.ProjectSummary;
+import riffle.model.Rule;
 import riffle.model.WaveBatch;
 
 /**
@@ -303,6 +310,11 @@ public final class ProjectStore implements AutoCloseable {
     return read(c -> AnswerRows.all(c, afterId));
   }
 
+  /** The given answers, in id order. */
+  public List<AnswerRow> answerRows(Collection<Long> ids) throws ProjectFileException {
+    return read(c -> AnswerRows.byIds(c, ids));
+  }
+
   /** The newest answer's id, or 0 in an empty project. */
   public long lastAnswerId() throws ProjectFileException {
     return read(c -> Summaries.number(c, "SELECT coalesce(max(id), 0) FROM answer"));
@@ -338,6 +350,111 @@ public final class ProjectStore implements AutoCloseable {
             return rs.next() ? rs.getString(1) : "no answer";
           }
         });
+  }
+
+  // ---- coding ----
+
+  /** A change to the codebook, the coding or the rules; returns its summary sentence. */
+  @FunctionalInterface
+  public interface EditWork {
+    String run(CodingEdit edit) throws ProjectFileException;
+  }
+
+  /**
+   * Makes one change in a write transaction: everything {@code work} writes lands together and is
+   * logged as one edit (undoable by {@code coder}) with one audit-log row, or nothing lands. An
+   * exception from {@code work} rolls everything back.
+   */
+  public EditOutcome edit(String coder, String action, EditWork work) throws ProjectFileException {
+    return write(
+        c -> {
+          CodingEdit edit = new CodingEdit(file, c, coder, action);
+          String summary = work.run(edit);
+          return Edits.finish(c, edit, action, summary);
+        });
+  }
+
+  /** Takes back {@code coder}'s newest change still in effect. */
+  public EditOutcome undo(String coder) throws ProjectFileException {
+    return replay(coder, true);
+  }
+
+  /** Makes again the change {@code coder} took back most recently. */
+  public EditOutcome redo(String coder) throws ProjectFileException {
+    return replay(coder, false);
+  }
+
+  private EditOutcome replay(String coder, boolean backwards) throws ProjectFileException {
+    String action = backwards ? "undo" : "redo";
+    return write(
+        c -> {
+          long target = backwards ? Edits.undoable(c, coder) : Edits.redoable(c, coder);
+          if (target == 0) {
+            return new EditOutcome(
+                0, action, 0, 0, backwards ? "Nothing of yours to undo." : "Nothing to redo.");
+          }
+          CodingEdit edit = new CodingEdit(file, c, coder, action);
+          String summary = Edits.replay(c, edit, target, backwards);
+          Edits.link(c, edit.editId(), target, backwards);
+          edit.note("target", target);
+          String words = (backwards ? "Undid: " : "Redid: ") + summary;
+          if (edit.skipped() > 0) {
+            words +=
+                " (" + edit.skipped() + " change(s) left as they are: someone changed them since)";
+          }
+          return Edits.finish(c, edit, action, words);
+        });
+  }
+
+  /** The codebook, in order. */
+  public List<Code> codes() throws ProjectFileException {
+    return read(CodingRows::codes);
+  }
+
+  /** The assignments of the given answers, by answer. */
+  public Map<Long, List<Assignment>> assignments(Collection<Long> answerIds)
+      throws ProjectFileException {
+    return read(c -> CodingRows.assignmentsOf(c, answerIds));
+  }
+
+  /** Every assignment of a code. */
+  public List<Assignment> assignmentsOfCode(long codeId) throws ProjectFileException {
+    return read(c -> CodingRows.assignments(c, "code_id = ?", codeId));
+  }
+
+  /** The answers from which a person removed the code. */
+  public List<Long> vetoes(long codeId) throws ProjectFileException {
+    return read(c -> CodingRows.vetoes(c, codeId));
+  }
+
+  /** Every saved rule. */
+  public List<Rule> rules() throws ProjectFileException {
+    return read(CodingRows::rules);
+  }
+
+  /** The newest audit-log rows, newest first. */
+  public List<HistoryEntry> history(int limit) throws ProjectFileException {
+    return read(c -> Audit.newest(c, limit));
+  }
+
+  /** The newest edit's id, or 0. */
+  public long lastEditId() throws ProjectFileException {
+    return read(c -> Summaries.number(c, "SELECT coalesce(max(id), 0) FROM edit"));
+  }
+
+  /**
+   * The answers whose coding changed in edits after {@code editId}: those an edit's steps name, and
+   * those carrying a code whose row changed (a rename shows in every answer of the code).
+   */
+  public Set<Long> answersTouchedSince(long editId) throws ProjectFileException {
+    return read(
+        c ->
+            Summaries.ids(
+                c,
+                "SELECT answer_id FROM edit_step WHERE edit_id > ?1 AND answer_id IS NOT NULL"
+                    + " UNION SELECT a.answer_id FROM assignment a WHERE a.code_id IN (SELECT"
+                    + " json_extract(row_key, '$.id') FROM edit_step WHERE edit_id > ?1 AND tbl = 'code')",
+                editId));
   }
 
   /** Work done on a connection. */
@@ -380,7 +497,7 @@ public final class ProjectStore implements AutoCloseable {
     }
   }
 
-  private static ProjectFileException translate(Path file, SQLException e) {
+  static ProjectFileException translate(Path file, SQLException e) {
     if (e instanceof SQLiteException se) {
       int code = se.getResultCode().code & 0xff; // primary code, without the extended bits
       if (code == SQLiteErrorCode.SQLITE_BUSY.code || code == SQLiteErrorCode.SQLITE_LOCKED.code) {

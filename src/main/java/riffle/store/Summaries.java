@@ -1,12 +1,15 @@
 package riffle.store;
 
 import java.sql.Connection;
+import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Set;
 import riffle.model.ProjectSummary;
 import riffle.model.WaveSummary;
 
@@ -71,5 +74,19 @@ final class Summaries {
         ResultSet rs = s.executeQuery(sql)) {
       return rs.next() ? rs.getLong(1) : 0;
     }
+  }
+
+  /** The ids a query with one long parameter ({@code ?1}) returns. */
+  static Set<Long> ids(Connection c, String sql, long parameter) throws SQLException {
+    Set<Long> out = new LinkedHashSet<>();
+    try (PreparedStatement ps = c.prepareStatement(sql)) {
+      ps.setLong(1, parameter);
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          out.add(rs.getLong(1));
+        }
+      }
+    }
+    return out;
   }
 }
