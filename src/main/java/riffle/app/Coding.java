@@ -1,6 +1,8 @@
 package riffle.app;
 
 import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.HashSet;
@@ -11,6 +13,8 @@ import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
 import riffle.coding.Codebook;
+import riffle.coding.CodebookFile;
+import riffle.coding.CodebookFile.Format;
 import riffle.index.QuerySyntaxException;
 import riffle.model.Assignment;
 import riffle.model.Code;
@@ -18,6 +22,7 @@ import riffle.model.CodeDraft;
 import riffle.model.EditOutcome;
 import riffle.model.HistoryEntry;
 import riffle.model.InputException;
+import riffle.model.InputProblem;
 import riffle.model.Origin;
 import riffle.model.Rule;
 import riffle.model.RulePreview;
@@ -335,6 +340,104 @@ public final class Coding {
     for (long answer : e.vetoes(codeId)) {
       e.removeVeto(answer, codeId);
     }
+  }
+
+  /**
+   * Brings in a codebook file: codes it names are updated, new ones created, themes set after all
+   * codes exist; codes it does not name are left as they are. All or nothing.
+   *
+   * @throws InputException naming the file and line of the first problem
+   */
+  public EditOutcome importCodebook(String coder, Path file) throws InputException {
+    byte[] bytes;
+    try {
+      bytes = Files.readAllBytes(file);
+    } catch (IOException e) {
+      throw new InputException(
+          new InputProblem(file.toString(), 0, 0, "cannot be read (" + e.getMessage() + ")"));
+    }
+    String source = file.getFileName().toString();
+    List<CodebookFile.Row> rows = CodebookFile.read(source, bytes, Format.of(source));
+    InputException[] failed = new InputException[1];
+    try {
+      return store.edit(
+          coder,
+          "import-codebook",
+          e -> {
+            int created = 0;
+            int changed = 0;
+            for (int pass = 0; pass < 2; pass++) {
+              for (CodebookFile.Row r : rows) {
+                CodeDraft d = r.draft();
+                CodeDraft fields =
+                    pass == 0
+                        ? new CodeDraft(
+                            d.name(),
+                            d.description(),
+                            d.include(),
+                            d.exclude(),
+                            d.colour(),
+                            d.key(),
+                            Optional.empty(),
+                            d.direction())
+                        : new CodeDraft(
+                            Optional.empty(),
+                            Optional.empty(),
+                            Optional.empty(),
+                            Optional.empty(),
+                            Optional.empty(),
+                            Optional.empty(),
+                            d.parent(),
+                            Optional.empty());
+                try {
+                  List<Code> book = e.codes();
+                  Optional<Code> have = Codebook.find(book, d.name().orElseThrow());
+                  if (have.isEmpty()) {
+                    e.putCode(
+                        Codebook.create(book, fields, e.newCodeId()).withArchived(r.archived()));
+                    created++;
+                  } else {
+                    Code next = Codebook.change(book, have.get(), fields);
+                    if (pass == 0) {
+                      next = next.withArchived(r.archived());
+                    }
+                    if (!next.equals(have.get())) {
+                      e.putCode(next);
+                      changed += pass == 0 ? 1 : 0;
+                    }
+                  }
+                } catch (IllegalArgumentException bad) {
+                  failed[0] =
+                      new InputException(new InputProblem(source, r.line(), 0, bad.getMessage()));
+                  throw bad;
+                }
+              }
+            }
+            e.note("file", source);
+            return "Brought in "
+                + source
+                + ": "
+                + created
+                + " code(s) created, "
+                + changed
+                + " changed.";
+          });
+    } catch (IllegalArgumentException bad) {
+      if (failed[0] != null) {
+        throw failed[0];
+      }
+      throw bad;
+    }
+  }
+
+  /**
+   * The codebook as the contents of a file named {@code fileName}: CSV or JSON, as its extension
+   * says.
+   */
+  public String exportCodebook(String fileName) throws InputException {
+    Format format = Format.of(fileName);
+    List<Code> book = store.codes();
+    return format == Format.CSV ? CodebookFile.csv(book) : CodebookFile.json(book);
   }
 
   // ---- coding answers ----

@@ -22,6 +22,12 @@ import picocli.CommandLine.Spec;
       AnalyzeCommand.class,
       SearchCommand.class,
       PhrasesCommand.class,
+      CodesCommand.class,
+      CodeCommand.class,
+      UndoCommand.class,
+      RedoCommand.class,
+      RulesCommand.class,
+      HistoryCommand.class,
       DemoCommand.class,
       CommandLine.HelpCommand.class
     })

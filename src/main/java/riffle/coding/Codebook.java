@@ -91,6 +91,25 @@ public final class Codebook {
             List.of(),
             false);
     Code made = apply(book, blank, draft);
+    if (draft.direction().isEmpty() && made.parent().isPresent()) {
+      // A code under a theme says what its theme says unless told otherwise.
+      Code theme = byId(book, made.parent().getAsLong());
+      made =
+          new Code(
+              made.id(),
+              made.name(),
+              made.description(),
+              made.include(),
+              made.exclude(),
+              made.colour(),
+              made.key(),
+              made.parent(),
+              theme.direction(),
+              made.archived(),
+              made.position(),
+              made.examples(),
+              made.imported());
+    }
     List<Code> after = new ArrayList<>(book);
     after.add(made);
     check(after);

@@ -1,0 +1,82 @@
+package riffle.cli;
+
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import riffle.model.InputException;
+import riffle.model.Span;
+
+/** {@code riffle code}: gives a code to an answer or takes it off. */
+@Command(
+    name = "code",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Gives a code to an answer (--add, optionally --span START:END of the words that carry it),",
+      "takes it off (--remove; rules will not give it back), or accepts a suggestion (--accept)."
+    })
+final class CodeCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Mixin CodingOptions options;
+
+  @Option(names = "--answer", required = true, paramLabel = "ID", description = "The answer's id.")
+  long answer;
+
+  @ArgGroup(multiplicity = "1")
+  What what;
+
+  static final class What {
+    @Option(names = "--add", paramLabel = "CODE", description = "Give this code.")
+    String add;
+
+    @Option(names = "--remove", paramLabel = "CODE", description = "Take this code off.")
+    String remove;
+
+    @Option(names = "--accept", paramLabel = "CODE", description = "Accept this suggested code.")
+    String accept;
+  }
+
+  @Option(
+      names = "--span",
+      paramLabel = "START:END",
+      description = "Character offsets into the masked answer of the words that carry the code.")
+  String span;
+
+  @Override
+  public Integer call() throws InputException {
+    Optional<Span> marked = span == null ? Optional.empty() : Optional.of(span(span));
+    if (marked.isPresent() && what.add == null) {
+      throw new IllegalArgumentException("--span goes with --add");
+    }
+    return CodesCommand.change(
+        spec,
+        options,
+        (c, coder) -> {
+          if (what.add != null) {
+            return c.assign(coder, answer, c.code(what.add).id(), marked);
+          }
+          if (what.remove != null) {
+            return c.unassign(coder, answer, c.code(what.remove).id());
+          }
+          return c.accept(coder, answer, c.code(what.accept).id());
+        });
+  }
+
+  static Span span(String text) {
+    String[] parts = text.split(":", -1);
+    try {
+      if (parts.length == 2) {
+        return new Span(Integer.parseInt(parts[0].strip()), Integer.parseInt(parts[1].strip()));
+      }
+    } catch (NumberFormatException e) {
+      // reported below
+    }
+    throw new IllegalArgumentException(
+        "--span " + text + ": write the start and end offsets as START:END, such as 4:17");
+  }
+}

@@ -1,0 +1,185 @@
+package riffle.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The codebook, coding, rules, undo and history from the command line. */
+class CodingCommandsTest {
+  @TempDir Path dir;
+  String project;
+
+  @BeforeEach
+  void importWave() {
+    project = dir.resolve("shop.riffle").toString();
+    CliTest.Run run =
+        CliTest.riffle(
+            "import",
+            "--project",
+            project,
+            "--file",
+            CliTest.fixture("two-questions.csv").toString(),
+            "--wave",
+            "Wave 1");
+    assertEquals(0, run.code(), run.err());
+  }
+
+  CliTest.Run ok(String... args) {
+    CliTest.Run run = CliTest.riffle(args);
+    assertEquals(0, run.code(), run.out() + run.err());
+    return run;
+  }
+
+  JsonNode codes() throws Exception {
+    return ok("codes", "--project", project, "--json").json().get("codes");
+  }
+
+  JsonNode codeNamed(String name) throws Exception {
+    for (JsonNode c : codes()) {
+      if (c.get("code").get("name").asText().equals(name)) {
+        return c;
+      }
+    }
+    throw new AssertionError("no code " + name + " in " + codes());
+  }
+
+  long firstAnswer(String query) throws Exception {
+    JsonNode hits =
+        ok("search", "--project", project, "--query", query, "--json").json().get("hits");
+    return hits.get(0).get("answer_id").asLong();
+  }
+
+  @Test
+  void aCodebookIsBuiltChangedAndUndoneFromTheCommandLine() throws Exception {
+    ok(
+        "codes",
+        "add",
+        "--project",
+        project,
+        "Fit",
+        "--key",
+        "f",
+        "--direction",
+        "friction",
+        "--coder",
+        "ana");
+    long fit = firstAnswer("cabinets");
+    String gave =
+        ok(
+                "code",
+                "--project",
+                project,
+                "--answer",
+                Long.toString(fit),
+                "--add",
+                "fit",
+                "--span",
+                "0:14",
+                "--coder",
+                "ana")
+            .out();
+    assertTrue(gave.contains("Gave \"Fit\""), gave);
+    assertEquals(1, codeNamed("Fit").get("answers").asInt());
+    assertEquals(1, codeNamed("fit on the counter").get("answers").asInt(), "imported code");
+
+    ok(
+        "codes",
+        "merge",
+        "--project",
+        project,
+        "fit on the counter",
+        "--into",
+        "Fit",
+        "--coder",
+        "ana");
+    assertEquals(1, codeNamed("Fit").get("answers").asInt(), "the same answer: collapsed");
+    ok("undo", "--project", project, "--coder", "ana");
+    assertEquals(1, codeNamed("fit on the counter").get("answers").asInt(), "merge undone");
+    String redo = ok("redo", "--project", project, "--coder", "ana").out();
+    assertTrue(redo.startsWith("Redid: Merged"), redo);
+
+    JsonNode history = ok("history", "--project", project, "--json").json().get("history");
+    assertEquals("redo", history.get(0).get("action").asText());
+    assertEquals("ana", history.get(0).get("actor").asText());
+  }
+
+  @Test
+  void aRuleIsPreviewedAppliedAndKeepsOffWhereAPersonSaidNo() throws Exception {
+    ok("codes", "add", "--project", project, "Price");
+    JsonNode preview =
+        ok("rules", "preview", "--project", project, "Price", "--query", "price OR steep", "--json")
+            .json();
+    assertEquals(2, preview.get("would_code").asInt(), preview.toString());
+    ok("rules", "add", "--project", project, "Price", "--query", "price OR steep");
+    ok("rules", "apply", "--project", project);
+    assertEquals(2, codeNamed("Price").get("answers").asInt());
+    long steep = firstAnswer("steep");
+    ok("code", "--project", project, "--answer", Long.toString(steep), "--remove", "Price");
+    String again = ok("rules", "apply", "--project", project).out();
+    assertTrue(again.contains("0 answer(s) coded, 1 left alone"), again);
+    assertEquals(1, codeNamed("Price").get("answers").asInt());
+  }
+
+  @Test
+  void badRequestsExitTwoWithAMessageAndChangeNothing() throws Exception {
+    ok("codes", "add", "--project", project, "Price", "--key", "p");
+    CliTest.Run dup = CliTest.riffle("codes", "add", "--project", project, "PRICE");
+    assertEquals(2, dup.code());
+    assertTrue(dup.err().contains("already a code named \"Price\""), dup.err());
+    CliTest.Run key = CliTest.riffle("codes", "add", "--project", project, "Cost", "--key", "j");
+    assertEquals(2, key.code());
+    CliTest.Run query =
+        CliTest.riffle("rules", "add", "--project", project, "Price", "--query", "price AND (");
+    assertEquals(2, query.code());
+    assertTrue(query.err().contains("query:1:12:"), query.err());
+    CliTest.Run span =
+        CliTest.riffle(
+            "code", "--project", project, "--answer", "1", "--add", "Price", "--span", "x");
+    assertEquals(2, span.code());
+    assertTrue(span.err().contains("START:END"), span.err());
+    assertTrue(ok("rules", "--project", project).out().contains("No rules yet"));
+  }
+
+  @Test
+  void theCodebookTravelsAsCsvAndJson() throws Exception {
+    ok("codes", "add", "--project", project, "Delivery", "--direction", "friction");
+    ok("codes", "add", "--project", project, "=Date unclear", "--theme", "Delivery", "--key", "d");
+    Path csv = dir.resolve("book.csv");
+    ok("codes", "save", "--project", project, "--out", csv.toString());
+    String text = Files.readString(csv, StandardCharsets.UTF_8);
+    assertTrue(text.contains("'=Date unclear,Delivery,friction,d"), text);
+
+    Path json = dir.resolve("book.json");
+    ok("codes", "save", "--project", project, "--out", json.toString());
+    String other = dir.resolve("other.riffle").toString();
+    ok("import", "--project", other, "--file", CliTest.fixture("two-questions.csv").toString());
+    ok("codes", "load", "--project", other, "--file", json.toString());
+    JsonNode loaded = ok("codes", "--project", other, "--json").json().get("codes");
+    boolean found = false;
+    for (JsonNode c : loaded) {
+      if (c.get("code").get("name").asText().equals("=Date unclear")) {
+        found = true;
+        assertEquals("Delivery", c.get("theme").asText());
+        assertEquals("d", c.get("code").get("key").asText());
+      }
+    }
+    assertTrue(found, loaded.toString());
+
+    Path bad = dir.resolve("bad.csv");
+    Files.writeString(
+        bad, "name,direction\nPrice,friction\nCost,sideways\n", StandardCharsets.UTF_8);
+    CliTest.Run run = CliTest.riffle("codes", "load", "--project", other, "--file", bad.toString());
+    assertEquals(2, run.code());
+    assertTrue(run.err().contains("bad.csv:3:2:"), run.err());
+    assertTrue(
+        CliTest.riffle("codes", "--project", other).out().indexOf("Price") < 0,
+        "nothing of the bad file was brought in");
+  }
+}
