@@ -483,8 +483,14 @@ public final class Coding {
                     + " characters)");
           }
           Optional<Assignment> had = e.assignment(answerId, codeId);
-          if (had.isPresent() && origin == Origin.SUGGESTION) {
-            return "Answer " + answerId + " already has \"" + c.name() + "\".";
+          if (had.isPresent()) {
+            Origin was = had.get().origin();
+            boolean confirms =
+                origin == Origin.MANUAL && (was == Origin.RULE || was == Origin.SUGGESTION);
+            boolean marks = span.isPresent() && !span.equals(had.get().span());
+            if (!confirms && !marks) {
+              return "Answer " + answerId + " already has \"" + c.name() + "\".";
+            }
           }
           Origin kept =
               had.map(Assignment::origin).filter(o -> o == Origin.IMPORTED).orElse(origin);

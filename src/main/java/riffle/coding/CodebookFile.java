@@ -155,6 +155,8 @@ public final class CodebookFile {
         }
         rows.add(row(source, line, cells, header));
       }
+    } catch (InputException e) {
+      throw e;
     } catch (IOException | UncheckedIOException | IllegalStateException e) {
       throw problem(source, 0, 0, "cannot be read as CSV (" + e.getMessage() + ")");
     }
