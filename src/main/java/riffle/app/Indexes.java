@@ -59,7 +59,7 @@ final class Indexes {
     try {
       long since = built.map(b -> codingOnlySince(b, stamp)).orElse(-1L);
       if (since >= 0) {
-        index.add(answers(store.answerRows(store.answersTouchedSince(since)), store), stamp);
+        index.update(answers(store.answerRows(store.answersTouchedSince(since)), store), stamp);
       } else {
         index.rebuild(answers(store, 0), stamp);
       }

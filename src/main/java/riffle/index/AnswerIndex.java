@@ -144,6 +144,19 @@ public final class AnswerIndex implements AutoCloseable {
     commit(stamp);
   }
 
+  /**
+   * Re-indexes answers whose coding changed. Searches see them at once; the change reaches the disk
+   * with the next commit or when the index is closed (until then, a crash leaves the index with its
+   * older stamp, and the next open catches up again).
+   */
+  public void update(List<IndexedAnswer> answers, String stamp) throws IOException {
+    for (IndexedAnswer a : answers) {
+      writer.updateDocument(new Term(ID_KEY, Long.toString(a.answerId())), document(a));
+    }
+    writer.setLiveCommitData(Map.of(STAMP, stamp).entrySet());
+    searchers.maybeRefreshBlocking();
+  }
+
   private void commit(String stamp) throws IOException {
     writer.setLiveCommitData(Map.of(STAMP, stamp).entrySet());
     writer.commit();

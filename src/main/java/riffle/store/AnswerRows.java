@@ -74,6 +74,11 @@ final class AnswerRows {
             "SELECT m.respondent_id, m.key, m.value FROM respondent_meta m"
                 + " JOIN respondent r ON r.id = m.respondent_id JOIN wave w ON w.id = r.wave_id"
                 + " WHERE 1 = 1"
+                + (ids.isEmpty()
+                    ? ""
+                    : " AND m.respondent_id IN (SELECT respondent_id FROM answer WHERE id"
+                        + idFilter
+                        + ")")
                 + waveFilter
                 + " ORDER BY 1")) {
       for (int i = 0; i < waves.size(); i++) {
