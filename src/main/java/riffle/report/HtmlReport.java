@@ -414,7 +414,14 @@ final class HtmlReport {
   }
 
   static String shorten(String s, int max) {
-    return s.length() <= max ? s : s.substring(0, max - 1) + "…";
+    if (s.length() <= max) {
+      return s;
+    }
+    int end = max - 1;
+    if (Character.isHighSurrogate(s.charAt(end - 1))) {
+      end--; // never split a character outside the Basic Multilingual Plane
+    }
+    return s.substring(0, end) + "…";
   }
 
   /** Escapes text for HTML element content and quoted attribute values. */
