@@ -156,7 +156,7 @@ final class HtmlReport {
     StringBuilder path = new StringBuilder();
     int i = 0;
     for (Map.Entry<String, Share> e : row.waves().entrySet()) {
-      double x = left + 14 + (n == 1 ? 0 : i * (width - left - 34.0) / (n - 1));
+      double x = left + 22 + (n == 1 ? 0 : i * (width - left - 52.0) / (n - 1));
       Share s = e.getValue();
       double y = y0 - s.share() / max * plot;
       double yl = y0 - s.ci().lower() / max * plot;
@@ -175,7 +175,7 @@ final class HtmlReport {
       h.append(
               String.format(
                   Locale.ROOT, "<text x=\"%.1f\" y=\"%d\" text-anchor=\"middle\">", x, height - 10))
-          .append(esc(shorten(e.getKey(), 12)))
+          .append(esc(shorten(e.getKey(), 10)))
           .append("</text>");
       path.append(i == 0 ? "M" : "L").append(String.format(Locale.ROOT, "%.1f %.1f ", x, y));
       i++;
@@ -201,7 +201,7 @@ final class HtmlReport {
       if (scope.getKey().isPresent()) {
         h.append("<p><strong>").append(esc(scope.getKey().get())).append("</strong></p>\n");
       }
-      heatmap(h, scope.getValue());
+      heatmap(h, scope.getValue(), q.codes());
       List<Cooccurrence> top =
           scope.getValue().stream()
               .filter(c -> c.count() > 0)
@@ -230,13 +230,20 @@ final class HtmlReport {
   }
 
   /** A matrix of lift: warm above 1 (together more often than chance), cool below. */
-  private static void heatmap(StringBuilder h, List<Cooccurrence> pairs) {
+  private static void heatmap(StringBuilder h, List<Cooccurrence> pairs, List<CodeFrequency> rows) {
     LinkedHashSet<String> names = new LinkedHashSet<>();
     for (Cooccurrence c : pairs) {
       names.add(c.a());
       names.add(c.b());
     }
-    List<String> codes = new ArrayList<>(names);
+    // Codebook order, so that a theme's codes sit together.
+    List<String> codes = new ArrayList<>();
+    for (CodeFrequency row : rows) {
+      if (names.remove(row.code())) {
+        codes.add(row.code());
+      }
+    }
+    codes.addAll(names);
     int cell = codes.size() > 25 ? 12 : 18;
     int label = 150;
     int size = label + cell * codes.size() + 4;
@@ -259,7 +266,7 @@ final class HtmlReport {
       double x = label + i * cell + cell * 0.75;
       h.append(
               String.format(
-                  Locale.ROOT, "<text transform=\"translate(%.1f %d) rotate(-60)\">", x, label - 4))
+                  Locale.ROOT, "<text transform=\"translate(%.1f %d) rotate(-90)\">", x, label - 4))
           .append(esc(shorten(codes.get(i), 22)))
           .append("</text>");
     }
