@@ -278,4 +278,33 @@ class ReportTest {
         IllegalArgumentException.class,
         () -> new ReportCode("a", "A", Optional.empty(), "happy", false));
   }
+
+  @Test
+  void aWaveWithoutAnswersIsNotComparedAndUncodedQuestionsHaveEmptySaturation() {
+    List<ReportAnswer> answers = new ArrayList<>();
+    for (int i = 0; i < 40; i++) {
+      answers.add(
+          new ReportAnswer(
+              "q" + i,
+              "Spring",
+              "Only asked once",
+              true,
+              Set.of("cost"),
+              Map.of(),
+              OptionalLong.empty()));
+    }
+    Findings only =
+        Report.compute(
+            new ReportInput(List.of("Only asked once"), Survey.WAVES, Survey.CODEBOOK, answers),
+            ReportSettings.DEFAULTS);
+    QuestionFindings q = only.questions().get(0);
+    assertEquals(List.of(), q.changes());
+    assertEquals(0, q.bases().get("Summer"));
+    Share empty = row(q, "cost").waves().get("Summer");
+    assertEquals(0, empty.share());
+    assertTrue(empty.smallBase() && empty.imprecise());
+    assertEquals(0, q.saturation().coded());
+    assertEquals(0, q.saturation().observed());
+    assertEquals(List.of(), q.saturation().curve());
+  }
 }
