@@ -27,4 +27,25 @@ public final class ChiSquare {
     }
     return Erf.erfc(Math.sqrt(x / 2));
   }
+
+  /**
+   * The p-value of a statistic under the chi-square distribution with {@code df} degrees of
+   * freedom, P(χ²<sub>df</sub> &gt; x) = Q(df/2, x/2), the regularized upper incomplete gamma
+   * function ({@link Gamma#regularizedUpper}); one degree of freedom goes through {@link
+   * #upperTailDf1(double)}.
+   *
+   * @param x the statistic
+   * @param df the degrees of freedom, at least 1
+   * @return the upper tail probability: 1 for x ≤ 0; NaN for NaN
+   * @throws IllegalArgumentException when df is below 1
+   */
+  public static double upperTail(double x, int df) {
+    if (df < 1) {
+      throw new IllegalArgumentException("degrees of freedom must be at least 1, got " + df);
+    }
+    if (df == 1 || Double.isNaN(x) || x <= 0) {
+      return upperTailDf1(x);
+    }
+    return Gamma.regularizedUpper(df / 2.0, x / 2);
+  }
 }

@@ -1,0 +1,63 @@
+package riffle.report;
+
+import java.util.List;
+import java.util.Objects;
+import riffle.model.Findings;
+
+/**
+ * Writes findings and coded answers as files analysts hand on: the report as one self-contained
+ * HTML page or as Markdown, the coded answers as CSV (wide: one row per answer and one 0/1 column
+ * per code; long: one row per code given), and the codebook as CSV or Markdown.
+ *
+ * <p>Every method returns the whole document as a string, to be written as UTF-8. Answer text is
+ * the masked text only. In HTML all project text is escaped and never becomes markup; in Markdown,
+ * Markdown and HTML syntax are escaped; in CSV every cell that starts with =, +, −, @, a tab or a
+ * carriage return gets a leading single quote (OWASP's CSV-injection guidance), and {@code withBom}
+ * starts the document with U+FEFF, which UTF-8 writes as the byte-order mark that spreadsheet
+ * programs look for.
+ */
+public final class Exports {
+  private Exports() {}
+
+  /** The findings as one HTML page with inline CSS and SVG charts, and no scripts. */
+  public static String html(Findings findings, String title) {
+    return HtmlReport.write(Objects.requireNonNull(findings, "findings"), title);
+  }
+
+  /** The findings as Markdown. */
+  public static String markdown(Findings findings, String title) {
+    return MarkdownReport.write(Objects.requireNonNull(findings, "findings"), title);
+  }
+
+  /**
+   * One row per answer: id, respondent, wave, question, substantive (1/0), one column per metadata
+   * key (sorted), the masked text, then one 0/1 column per active code in codebook order, 1 when
+   * the answer carries the code or a code below it (as the findings count).
+   *
+   * @throws IllegalArgumentException when an answer carries a code the codebook does not have
+   */
+  public static String codedAnswersCsv(CodedExport export, boolean withBom) {
+    return CodedCsv.wide(export, withBom);
+  }
+
+  /**
+   * One row per code given: answer, respondent, wave, question, code id and name, archived (1/0),
+   * coder, origin, and the span (start, end, passage of the masked text; empty for the whole
+   * answer).
+   *
+   * @throws IllegalArgumentException when an answer carries a code the codebook does not have
+   */
+  public static String codedAnswersLongCsv(CodedExport export, boolean withBom) {
+    return CodedCsv.longFormat(export, withBom);
+  }
+
+  /** The codebook as CSV: id, name, parent id and name, direction, archived (1/0). */
+  public static String codebookCsv(List<ReportCode> codebook, boolean withBom) {
+    return CodedCsv.codebookCsv(codebook, withBom);
+  }
+
+  /** The codebook as a nested Markdown list, themes above their codes. */
+  public static String codebookMarkdown(List<ReportCode> codebook, String title) {
+    return CodedCsv.codebookMarkdown(codebook, title);
+  }
+}
