@@ -87,7 +87,7 @@ final class PhraseMining {
             + String.join(", ", waves));
   }
 
-  private static String question(String given, List<String> questions) {
+  static String question(String given, List<String> questions) {
     String q = given.strip();
     if (q.matches("\\d+")) {
       int n = Integer.parseInt(q);

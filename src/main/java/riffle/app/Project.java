@@ -157,6 +157,11 @@ public final class Project implements AutoCloseable {
     return store.summary();
   }
 
+  /** Findings and exports. */
+  public Reporting reporting() {
+    return new Reporting(store);
+  }
+
   /** The codebook, the coding and the rules. */
   public Coding coding() {
     return new Coding(store, this);

@@ -28,6 +28,8 @@ import picocli.CommandLine.Spec;
       RedoCommand.class,
       RulesCommand.class,
       HistoryCommand.class,
+      ReportCommand.class,
+      ExportCommand.class,
       DemoCommand.class,
       CommandLine.HelpCommand.class
     })

@@ -1,0 +1,182 @@
+package riffle.app;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalLong;
+import java.util.Set;
+import riffle.model.Assignment;
+import riffle.model.Code;
+import riffle.model.Findings;
+import riffle.model.InputException;
+import riffle.model.WaveSummary;
+import riffle.report.CodedExport;
+import riffle.report.ExportAnswer;
+import riffle.report.ExportAssignment;
+import riffle.report.Exports;
+import riffle.report.Report;
+import riffle.report.ReportAnswer;
+import riffle.report.ReportCode;
+import riffle.report.ReportInput;
+import riffle.report.ReportSettings;
+import riffle.store.ProjectStore;
+
+/** Findings and exports of a project: read from the project file, computed by {@code report}. */
+public final class Reporting {
+  private final ProjectStore store;
+
+  Reporting(ProjectStore store) {
+    this.store = store;
+  }
+
+  /** What the findings are computed from, loaded once. */
+  private record Loaded(
+      List<String> questions,
+      List<String> waves,
+      List<Code> codes,
+      List<ProjectStore.AnswerRow> rows,
+      Map<Long, List<Assignment>> assignments) {}
+
+  private Loaded load(Optional<String> question) throws InputException {
+    List<String> questions = store.questions();
+    Optional<String> only = question.map(q -> PhraseMining.question(q, questions));
+    List<String> waves = new ArrayList<>();
+    for (WaveSummary w : store.summary().waves()) {
+      waves.add(w.name());
+    }
+    List<ProjectStore.AnswerRow> rows = store.answerRows(List.of(), only);
+    List<Long> ids = new ArrayList<>(rows.size());
+    rows.forEach(r -> ids.add(r.id()));
+    return new Loaded(
+        only.map(List::of).orElse(questions), waves, store.codes(), rows, store.assignments(ids));
+  }
+
+  /**
+   * Theme frequencies with intervals, changes between waves, co-occurrence and saturation.
+   *
+   * @throws IllegalArgumentException when the query names a question, wave or segment the project
+   *     lacks
+   */
+  public Findings findings(FindingsQuery query) throws InputException {
+    Loaded l = load(query.question());
+    ReportSettings settings = ReportSettings.DEFAULTS;
+    if (query.segment().isPresent()) {
+      settings = settings.withSegment(query.segment().get());
+    }
+    if (query.from().isPresent() || query.to().isPresent()) {
+      settings =
+          new ReportSettings(
+              settings.segment(),
+              query.from().map(w -> wave(w, l.waves)),
+              query.to().map(w -> wave(w, l.waves)),
+              false);
+    }
+    List<ReportAnswer> answers = new ArrayList<>(l.rows.size());
+    for (ProjectStore.AnswerRow r : l.rows) {
+      List<Assignment> as = l.assignments.getOrDefault(r.id(), List.of());
+      Set<String> codes = new HashSet<>();
+      long first = Long.MAX_VALUE;
+      for (Assignment a : as) {
+        codes.add(Long.toString(a.codeId()));
+        if (a.origin().human()) {
+          // Coding order: when a person first coded it (ties, such as one import, in answer order).
+          first = Math.min(first, a.at().toEpochMilli());
+        }
+      }
+      answers.add(
+          new ReportAnswer(
+              Long.toString(r.id()),
+              r.wave(),
+              r.question(),
+              r.substantive(),
+              codes,
+              r.segments(),
+              first == Long.MAX_VALUE ? OptionalLong.empty() : OptionalLong.of(first)));
+    }
+    return Report.compute(
+        new ReportInput(l.questions, l.waves, codebook(l.codes), answers), settings);
+  }
+
+  /** The findings as one self-contained HTML page. */
+  public String html(FindingsQuery query, String title) throws InputException {
+    return Exports.html(findings(query), title);
+  }
+
+  /** The findings as Markdown. */
+  public String markdown(FindingsQuery query, String title) throws InputException {
+    return Exports.markdown(findings(query), title);
+  }
+
+  /**
+   * The coded answers as CSV: one row per answer with a 0/1 column per code, or ({@code long}) one
+   * row per assignment. Masked text only.
+   */
+  public String codedCsv(Optional<String> question, boolean longFormat, boolean withBom)
+      throws InputException {
+    Loaded l = load(question);
+    List<ExportAnswer> answers = new ArrayList<>(l.rows.size());
+    for (ProjectStore.AnswerRow r : l.rows) {
+      List<ExportAssignment> as = new ArrayList<>();
+      for (Assignment a : l.assignments.getOrDefault(r.id(), List.of())) {
+        as.add(
+            new ExportAssignment(
+                Long.toString(a.codeId()),
+                a.coder(),
+                a.origin().name().toLowerCase(Locale.ROOT),
+                a.span().map(s -> s.start()).orElse(ExportAssignment.WHOLE_ANSWER),
+                a.span().map(s -> s.end()).orElse(ExportAssignment.WHOLE_ANSWER)));
+      }
+      answers.add(
+          new ExportAnswer(
+              Long.toString(r.id()),
+              r.respondent(),
+              r.wave(),
+              r.question(),
+              r.substantive(),
+              r.masked(),
+              r.segments(),
+              as));
+    }
+    CodedExport export = new CodedExport(codebook(l.codes), answers);
+    return longFormat
+        ? Exports.codedAnswersLongCsv(export, withBom)
+        : Exports.codedAnswersCsv(export, withBom);
+  }
+
+  /** The codebook as Markdown, themes above their codes. */
+  public String codebookMarkdown(String title) throws InputException {
+    return Exports.codebookMarkdown(codebook(store.codes()), title);
+  }
+
+  private static List<ReportCode> codebook(List<Code> codes) {
+    List<ReportCode> out = new ArrayList<>(codes.size());
+    Map<Long, Code> byId = new HashMap<>();
+    codes.forEach(c -> byId.put(c.id(), c));
+    for (Code c : codes) {
+      out.add(
+          new ReportCode(
+              Long.toString(c.id()),
+              c.name(),
+              c.parent().isPresent()
+                  ? Optional.of(Long.toString(c.parent().getAsLong()))
+                  : Optional.empty(),
+              c.direction().name().toLowerCase(Locale.ROOT),
+              c.archived()));
+    }
+    return out;
+  }
+
+  private static String wave(String given, List<String> waves) {
+    for (String w : waves) {
+      if (w.equalsIgnoreCase(given.strip())) {
+        return w;
+      }
+    }
+    throw new IllegalArgumentException(
+        "no wave \"" + given + "\"; the waves are " + String.join(", ", waves));
+  }
+}

@@ -1,0 +1,136 @@
+package riffle.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import riffle.app.FindingsQuery;
+import riffle.app.Project;
+import riffle.model.EditOutcome;
+import riffle.model.InputException;
+
+/** {@code riffle export}: coded answers, the codebook or the findings as files. */
+@Command(
+    name = "export",
+    mixinStandardHelpOptions = true,
+    description = {
+      "Writes a file: the coded answers (csv: one row per answer with a 0/1 column per code, or",
+      "--long: one row per code given), the codebook (csv, json, md) or the findings (html, md,",
+      "json). Answers are always the masked text."
+    })
+final class ExportCommand implements Callable<Integer> {
+  enum What {
+    CODED,
+    CODEBOOK,
+    FINDINGS
+  }
+
+  enum Format {
+    CSV,
+    MD,
+    JSON,
+    HTML
+  }
+
+  @Spec CommandSpec spec;
+
+  @Option(names = "--project", required = true, paramLabel = "P", description = "Project file.")
+  Path project;
+
+  @Option(
+      names = "--what",
+      required = true,
+      paramLabel = "WHAT",
+      description = "coded, codebook or findings.")
+  What what;
+
+  @Option(
+      names = "--format",
+      required = true,
+      paramLabel = "F",
+      description = "csv, md, json or html.")
+  Format format;
+
+  @Option(names = "--out", required = true, paramLabel = "FILE", description = "The file to write.")
+  Path out;
+
+  @Option(
+      names = "--question",
+      paramLabel = "Q",
+      description = "Only this question: its number or text.")
+  String question;
+
+  @Option(
+      names = "--long",
+      description = "Coded answers: one row per code given, with coder, origin and span.")
+  boolean longFormat;
+
+  @Option(
+      names = "--bom",
+      description = "Start CSV files with a byte-order mark, for spreadsheets.")
+  boolean bom;
+
+  @Mixin JsonOption json;
+
+  @Override
+  public Integer call() throws InputException {
+    String text;
+    String title = project.getFileName().toString();
+    FindingsQuery findings =
+        new FindingsQuery(
+            Optional.ofNullable(question), Optional.empty(), Optional.empty(), Optional.empty());
+    try (Project p = Project.openExisting(project)) {
+      text =
+          switch (what) {
+            case CODED -> {
+              require(format == Format.CSV, "coded answers are written as csv");
+              yield p.reporting().codedCsv(Optional.ofNullable(question), longFormat, bom);
+            }
+            case CODEBOOK ->
+                switch (format) {
+                  case CSV -> (bom ? "\uFEFF" : "") + p.coding().exportCodebook("codebook.csv");
+                  case JSON -> p.coding().exportCodebook("codebook.json");
+                  case MD -> p.reporting().codebookMarkdown("Codebook — " + title);
+                  case HTML ->
+                      throw new IllegalArgumentException(
+                          "the codebook is written as csv, json or md");
+                };
+            case FINDINGS ->
+                switch (format) {
+                  case HTML -> p.reporting().html(findings, "Findings — " + title);
+                  case MD -> p.reporting().markdown(findings, "Findings — " + title);
+                  case JSON ->
+                      Json.MAPPER
+                              .writerWithDefaultPrettyPrinter()
+                              .writeValueAsString(p.reporting().findings(findings))
+                          + "\n";
+                  case CSV ->
+                      throw new IllegalArgumentException(
+                          "the findings are written as html, md or json");
+                };
+          };
+    } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+      throw new IllegalStateException("cannot write JSON: " + e.getMessage(), e);
+    }
+    Files.write(out, text);
+    PrintWriter w = spec.commandLine().getOut();
+    EditOutcome done = new EditOutcome(0, "export", 0, 0, "Wrote " + out + ".");
+    if (json.enabled) {
+      Json.print(w, done);
+    } else {
+      w.println(done.message());
+    }
+    return 0;
+  }
+
+  private static void require(boolean ok, String message) {
+    if (!ok) {
+      throw new IllegalArgumentException(message);
+    }
+  }
+}
