@@ -12,14 +12,21 @@ package riffle.coding;
  * so equal input gives bit-identical weights. Stateless; thread-safe.
  */
 final class LogisticRegression {
-  /** The L2 penalty λ; chosen on the demo pilot (see the package overview). */
-  static final double PENALTY = 0.5;
+  /**
+   * The L2 penalty λ, chosen on the demo pilot among 0.02, 0.05, 0.1, 0.2, 0.5, 1 and 2 (best
+   * micro-F1 at 300 and 1,000 coded answers; rows have unit length, so λ is small).
+   */
+  static final double PENALTY = 0.1;
 
   /** Iterations never exceed this; the fit usually stops well before. */
-  static final int MAX_ITERATIONS = 200;
+  static final int MAX_ITERATIONS = 100;
 
-  /** Stop when an iteration lowers the objective by less than this share of its value. */
-  static final double TOLERANCE = 1e-6;
+  /**
+   * Stop when an iteration lowers the objective by less than this share of its value; tighter
+   * tolerances (down to 1e-6) changed no micro-F1 figure of the bench in the third decimal and took
+   * twice as long.
+   */
+  static final double TOLERANCE = 1e-4;
 
   private static final int MEMORY = 10;
   private static final double ARMIJO = 1e-4;

@@ -8,8 +8,9 @@
  *
  * <h2>Features</h2>
  *
- * Binary features of the text pipeline's analysis, within each sentence: every word's stem, every
- * pair of adjacent stems, and every chunk of two or more words (leading determiners dropped) as its
+ * Binary features of the text pipeline's analysis, within each sentence: every word's stem, the
+ * first five letters of stems longer than that (so that misspellings share a feature), every pair
+ * of adjacent stems, and every chunk of two or more words (leading determiners dropped) as its
  * stems. A word a negation governs becomes {@code not:stem}, so "not expensive" and "expensive" are
  * different features. Features found in fewer than {@code cutoff} training answers (default 2) are
  * dropped. Each answer's feature vector is scaled to unit length. An answer without sentences (not

@@ -1,6 +1,8 @@
 package riffle.coding;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -411,16 +413,20 @@ public final class SuggestBench {
     double first = (System.nanoTime() - t0) / 1e9;
     double best = Double.MAX_VALUE;
     double sum = 0;
+    double cpu = 0;
     for (int r = 0; r < runs; r++) {
+      long c = cpuNanos();
       long t = System.nanoTime();
       SuggestionEngine.train(examples, codes, settings);
       double sec = (System.nanoTime() - t) / 1e9;
+      cpu += (cpuNanos() - c) / 1e9;
       best = Math.min(best, sec);
       sum += sec;
     }
     System.out.printf(
         Locale.ROOT,
-        "%nretraining: %,d coded answers, %d codes, %d folds: first %.2f s, best %.2f s, mean %.2f s of %d (%d cores)%n",
+        "%nretraining: %,d coded answers, %d codes, %d folds: first %.2f s, best %.2f s, mean %.2f s"
+            + " of %d, mean CPU time %.2f s (%d cores, load average %.1f)%n",
         examples.size(),
         codes.size(),
         settings.folds(),
@@ -428,6 +434,18 @@ public final class SuggestBench {
         best,
         sum / runs,
         runs,
-        Runtime.getRuntime().availableProcessors());
+        cpu / runs,
+        Runtime.getRuntime().availableProcessors(),
+        ManagementFactory.getOperatingSystemMXBean().getSystemLoadAverage());
+  }
+
+  /** CPU time of every live thread (the fork-join workers outlive one training run). */
+  private static long cpuNanos() {
+    ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+    long sum = 0;
+    for (long id : threads.getAllThreadIds()) {
+      sum += Math.max(0, threads.getThreadCpuTime(id));
+    }
+    return sum;
   }
 }
