@@ -118,6 +118,10 @@ class SuggestionEngineTest {
     List<Long> high = codes(engine.suggest(2, analyse("well it was expensive for me"), Set.of()));
     assertEquals(List.of(PRICE_FINE), fine);
     assertEquals(List.of(PRICE_TOO_HIGH), high);
+    // A cue no training answer used: only the negation mark links it to "not expensive".
+    List<Long> hardly =
+        codes(engine.suggest(3, analyse("honestly it was hardly expensive"), Set.of()));
+    assertEquals(List.of(PRICE_FINE), hardly);
   }
 
   @Test
