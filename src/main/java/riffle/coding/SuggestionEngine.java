@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.function.IntPredicate;
 import java.util.stream.IntStream;
 import riffle.model.Analysis;
 import riffle.model.CodeMetrics;
@@ -272,7 +273,7 @@ public final class SuggestionEngine {
           codes, weights, thresholds, Map.copyOf(columns), List.copyOf(metrics));
     }
 
-    private double threshold(double[] scores, boolean[] y, java.util.function.IntPredicate use) {
+    private double threshold(double[] scores, boolean[] y, IntPredicate use) {
       Integer[] order = IntStream.range(0, n).filter(use).boxed().toArray(Integer[]::new);
       Arrays.sort(
           order, Comparator.<Integer>comparingDouble(i -> -scores[i]).thenComparingInt(i -> i));
