@@ -28,6 +28,7 @@ import riffle.model.Rule;
 import riffle.model.RulePreview;
 import riffle.model.SearchHit;
 import riffle.model.SearchResult;
+import riffle.model.ShownSuggestion;
 import riffle.model.Span;
 import riffle.store.CodingEdit;
 import riffle.store.ProjectFileException;
@@ -500,6 +501,44 @@ public final class Coding {
           e.note("answer", answerId);
           e.note("code", c.name());
           return "Gave \"" + c.name() + "\" to answer " + answerId + ".";
+        });
+  }
+
+  /**
+   * Accepts every suggestion at or above a confidence, in one edit marked with that confidence
+   * (undo takes them all back). Answers that got the code since, or from which a person took it,
+   * are left alone.
+   */
+  public EditOutcome acceptAbove(String coder, List<ShownSuggestion> suggestions, double above)
+      throws InputException {
+    if (!(above > 0 && above <= 1)) {
+      throw new IllegalArgumentException(
+          "accept suggestions above a confidence between 0 and 1, not " + above);
+    }
+    return store.edit(
+        coder,
+        "accept-above",
+        e -> {
+          int given = 0;
+          for (ShownSuggestion s : suggestions) {
+            if (s.confidence() < above
+                || e.assignment(s.answerId(), s.codeId()).isPresent()
+                || e.vetoed(s.answerId(), s.codeId())
+                || Codebook.byId(e.codes(), s.codeId()).archived()) {
+              continue;
+            }
+            e.putAssignment(
+                new Assignment(
+                    s.answerId(), s.codeId(), Optional.empty(), coder, Origin.SUGGESTION, e.at()));
+            given++;
+          }
+          e.note("above", above);
+          e.note("accepted", given);
+          return String.format(
+              java.util.Locale.ROOT,
+              "Accepted %d suggestion(s) with a confidence of %.2f or more.",
+              given,
+              above);
         });
   }
 

@@ -72,7 +72,7 @@ final class PhraseMining {
         report.answers(), wave, question, against, report.phrases(), report.clusters(), keyness);
   }
 
-  private static String known(String wave, List<String> waves, String option) {
+  static String known(String wave, List<String> waves, String option) {
     for (String w : waves) {
       if (w.equalsIgnoreCase(wave.strip())) {
         return w;

@@ -12,6 +12,7 @@ import riffle.model.Progress;
 import riffle.model.ProjectSummary;
 import riffle.model.SearchResult;
 import riffle.model.Sentence;
+import riffle.model.SuggestionReport;
 import riffle.store.AnalysisCache;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
@@ -155,6 +156,38 @@ public final class Project implements AutoCloseable {
   /** Counts of waves, answers, codes and assignments. */
   public ProjectSummary summary() throws InputException {
     return store.summary();
+  }
+
+  /**
+   * Trains the suggestion engines now and returns what they would show for the answers of a wave
+   * (or of every wave), with their cross-validated metrics.
+   *
+   * @throws IllegalArgumentException when the wave is not in the project
+   */
+  public SuggestionReport suggest(Optional<String> wave) throws InputException {
+    List<String> waves = new java.util.ArrayList<>();
+    if (wave.isPresent()) {
+      List<String> all = new java.util.ArrayList<>();
+      store.summary().waves().forEach(w -> all.add(w.name()));
+      waves.add(PhraseMining.known(wave.get(), all, "--wave"));
+    }
+    Suggestions.Trained trained =
+        Suggestions.train(store, riffle.coding.SuggestSettings.defaults());
+    return Suggestions.suggest(store, trained, store.answerRows(waves, Optional.empty()));
+  }
+
+  /**
+   * What the newest engines of {@code trainer} would show for these answers, without waiting for
+   * any training: empty until the first training has finished. Starts a retraining when the coding
+   * changed since.
+   */
+  public Optional<SuggestionReport> suggestFor(List<Long> answerIds, SuggestionTrainer trainer)
+      throws InputException {
+    Optional<Suggestions.Trained> trained = trainer.latest(store.contentStamp());
+    if (trained.isEmpty()) {
+      return Optional.empty();
+    }
+    return Optional.of(Suggestions.suggest(store, trained.get(), store.answerRows(answerIds)));
   }
 
   /** Findings and exports. */

@@ -71,8 +71,8 @@ public final class Reporting {
       settings =
           new ReportSettings(
               settings.segment(),
-              query.from().map(w -> wave(w, l.waves)),
-              query.to().map(w -> wave(w, l.waves)),
+              query.from().map(w -> PhraseMining.known(w, l.waves, "--from")),
+              query.to().map(w -> PhraseMining.known(w, l.waves, "--to")),
               false);
     }
     List<ReportAnswer> answers = new ArrayList<>(l.rows.size());
@@ -168,15 +168,5 @@ public final class Reporting {
               c.archived()));
     }
     return out;
-  }
-
-  private static String wave(String given, List<String> waves) {
-    for (String w : waves) {
-      if (w.equalsIgnoreCase(given.strip())) {
-        return w;
-      }
-    }
-    throw new IllegalArgumentException(
-        "no wave \"" + given + "\"; the waves are " + String.join(", ", waves));
   }
 }

@@ -28,6 +28,7 @@ import picocli.CommandLine.Spec;
       RedoCommand.class,
       RulesCommand.class,
       HistoryCommand.class,
+      SuggestCommand.class,
       ReportCommand.class,
       ExportCommand.class,
       DemoCommand.class,
