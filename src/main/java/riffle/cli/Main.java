@@ -22,6 +22,7 @@ import picocli.CommandLine.Spec;
       AnalyzeCommand.class,
       SearchCommand.class,
       PhrasesCommand.class,
+      ServeCommand.class,
       DemoCommand.class,
       CommandLine.HelpCommand.class
     })
