@@ -119,6 +119,13 @@ export function mount(section, context) {
           h('label', { for: 'bring-file' }, 'A file (CSV or TSV)'),
           els.file,
           els.fileError,
+          h(
+            'div',
+            { class: 'fields' },
+            h('div', { class: 'field' }, h('label', { for: 'bring-delimiter' }, 'Delimiter'), els.delimiter),
+            h('div', { class: 'field' }, h('label', { for: 'bring-encoding' }, 'Encoding'), els.encoding),
+          ),
+          h('p', { class: 'hint' }, 'Both are detected; change them when the preview looks wrong.'),
         ),
         h(
           'div',
@@ -128,12 +135,6 @@ export function mount(section, context) {
           els.pasteError,
           h('div', { class: 'actions' }, els.readPaste),
         ),
-      ),
-      h(
-        'div',
-        { class: 'fields' },
-        h('div', { class: 'field' }, h('label', { for: 'bring-delimiter' }, 'Delimiter'), els.delimiter),
-        h('div', { class: 'field' }, h('label', { for: 'bring-encoding' }, 'Encoding'), els.encoding),
       ),
     ),
     els.previewBox,
@@ -305,7 +306,8 @@ function showPreview() {
     h(
       'p',
       { class: 'readas', id: 'bring-readas' },
-      `Read as ${detectedLabel(p.encoding, p.encoding_detected)}, ${detectedLabel(p.delimiter, p.delimiter_detected)}-separated · `,
+      p.encoding === 'pasted text' ? 'Pasted text' : `Read as ${detectedLabel(p.encoding, p.encoding_detected)}`,
+      `, columns separated by ${detectedLabel(p.delimiter, p.delimiter_detected)} · `,
       h('strong', {}, plural(p.total_rows, 'row')),
       ' to bring in',
       p.skipped_rows ? ` · ${plural(p.skipped_rows, 'row')} left out` : '',
@@ -401,7 +403,7 @@ function showOutcome(r) {
     els.outcome,
     h(
       'div',
-      { class: 'done', role: 'status', id: 'bring-done' },
+      { class: 'done', role: 'status', id: 'bring-done', tabindex: '-1' },
       h('h3', {}, `Wave “${r.wave}” brought in`),
       h(
         'p',
@@ -418,4 +420,7 @@ function showOutcome(r) {
       h('p', {}, h('a', { href: '#phrases' }, 'See its recurring phrases'), ' or ', h('a', { href: '#find' }, 'find answers'), '.'),
     ),
   );
+  const done = document.getElementById('bring-done');
+  done.scrollIntoView({ block: 'center' });
+  done.focus({ preventScroll: true });
 }

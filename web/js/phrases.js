@@ -103,7 +103,9 @@ function goFind(q) {
 }
 
 function show(found) {
-  const waveNames = found.phrases.length ? Object.keys(found.phrases[0].waves) : [];
+  const allWaves = found.phrases.length ? Object.keys(found.phrases[0].waves) : [];
+  // One column per wave only when there is more than one to compare.
+  const waveNames = allWaves.length > 1 ? allWaves : [];
   const phrases = h(
     'section',
     { class: 'panel', 'aria-labelledby': 'h-phrases-list' },
