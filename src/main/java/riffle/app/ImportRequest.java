@@ -1,10 +1,14 @@
 package riffle.app;
 
 import java.time.LocalDate;
+import java.util.EnumMap;
+import java.util.Locale;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import riffle.ingest.Delimiter;
 import riffle.ingest.ImportSettings;
+import riffle.model.ColumnRole;
 
 /**
  * One import: what to read, into which wave, and how to read it. Built by {@link #from}; the
@@ -64,6 +68,7 @@ public final class ImportRequest {
     private String wave;
     private LocalDate fieldedOn;
     private String actor = "analyst";
+    private final Map<ColumnRole, String> singles = new EnumMap<>(ColumnRole.class);
 
     private Builder(ImportSource source) {
       this.source = Objects.requireNonNull(source, "source");
@@ -142,6 +147,43 @@ public final class ImportRequest {
     /** A segment column to keep; repeatable. */
     public Builder metaColumn(String header) {
       settings.metaColumn(header);
+      return this;
+    }
+
+    /** A column not to import, whatever detection would make of it; repeatable. */
+    public Builder skippedColumn(String header) {
+      settings.skippedColumn(header);
+      return this;
+    }
+
+    /**
+     * Names a column for a role, as the option for that role would ({@link ColumnRole#IGNORED}
+     * skips it).
+     */
+    public Builder column(String header, ColumnRole role) {
+      Objects.requireNonNull(role, "role");
+      if (role == ColumnRole.ID || role == ColumnRole.DATE || role == ColumnRole.CODER) {
+        String earlier = singles.putIfAbsent(role, header);
+        if (earlier != null) {
+          throw new IllegalArgumentException(
+              "only one column can be the "
+                  + role.name().toLowerCase(Locale.ROOT)
+                  + " column, but both '"
+                  + earlier
+                  + "' and '"
+                  + header
+                  + "' were given that role; give one of them another role");
+        }
+      }
+      switch (role) {
+        case TEXT -> textColumn(header);
+        case ID -> idColumn(header);
+        case DATE -> dateColumn(header);
+        case CODES -> codesColumn(header);
+        case CODER -> coderColumn(header);
+        case META -> metaColumn(header);
+        case IGNORED -> skippedColumn(header);
+      }
       return this;
     }
 

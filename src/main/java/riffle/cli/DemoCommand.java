@@ -19,7 +19,8 @@ import riffle.app.ImportReport;
     mixinStandardHelpOptions = true,
     description = {
       "Builds the demo project from the bundled sample waves (an invented shop's buyer survey)",
-      "in a working folder outside the repository, reusing it on later runs."
+      "in a working folder outside the repository, reusing it on later runs, then serves it to",
+      "your browser until interrupted (leave that out with --no-serve)."
     })
 final class DemoCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
@@ -30,6 +31,22 @@ final class DemoCommand implements Callable<Integer> {
       description = "Working folder (default: ~/.riffle/demo).")
   Path dir;
 
+  @Option(names = "--no-serve", description = "Only build the project; do not serve it.")
+  boolean noServe;
+
+  @Option(
+      names = "--port",
+      paramLabel = "N",
+      defaultValue = "0",
+      description = "Port to serve on; 0 picks a free one (default: ${DEFAULT-VALUE}).")
+  int port;
+
+  @Option(
+      names = "--web-dir",
+      paramLabel = "DIR",
+      description = "Serve the page from this folder (the repository's web/) instead of the jar.")
+  Path webDir;
+
   @Mixin JsonOption json;
 
   @Override
@@ -39,7 +56,7 @@ final class DemoCommand implements Callable<Integer> {
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
       Json.print(out, result);
-      return 0;
+      return serve(result, spec.commandLine().getErr());
     }
     if (result.reused()) {
       out.println("Reusing the demo project (the sample waves have not changed).");
@@ -62,6 +79,14 @@ final class DemoCommand implements Callable<Integer> {
             + "  riffle phrases --project %1$s --question 1 --wave \"Wave 3\" --against \"Wave 2\"%n"
             + "  riffle search --project %1$s --query '\"delivery date\" AND wave:\"Wave 3\"'%n",
         result.project());
-    return 0;
+    return serve(result, out);
+  }
+
+  private int serve(DemoProject.Result result, PrintWriter out) throws IOException {
+    if (noServe) {
+      return 0;
+    }
+    out.println();
+    return Serving.serve(result.project(), ServeCommand.options("127.0.0.1", port, webDir), out);
   }
 }

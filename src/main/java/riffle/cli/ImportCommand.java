@@ -100,6 +100,12 @@ final class ImportCommand implements Callable<Integer> {
   List<String> metaColumns = new ArrayList<>();
 
   @Option(
+      names = "--skip-column",
+      paramLabel = "C",
+      description = "A column not to import, whatever it looks like (repeatable).")
+  List<String> skippedColumns = new ArrayList<>();
+
+  @Option(
       names = "--delimiter",
       paramLabel = "auto|,|;|tab|pipe",
       defaultValue = "auto",
@@ -139,6 +145,7 @@ final class ImportCommand implements Callable<Integer> {
     textColumns.forEach(request::textColumn);
     codesColumns.forEach(request::codesColumn);
     metaColumns.forEach(request::metaColumn);
+    skippedColumns.forEach(request::skippedColumn);
     if (idColumn != null) {
       request.idColumn(idColumn);
     }

@@ -31,6 +31,7 @@ import picocli.CommandLine.Spec;
       SuggestCommand.class,
       ReportCommand.class,
       ExportCommand.class,
+      ServeCommand.class,
       DemoCommand.class,
       CommandLine.HelpCommand.class
     })

@@ -34,6 +34,7 @@ public final class ImportSettings {
   private final List<String> codesColumns;
   private final Optional<String> coderColumn;
   private final List<String> metaColumns;
+  private final List<String> skippedColumns;
   private final long maxBytes;
   private final int maxProblems;
 
@@ -46,6 +47,7 @@ public final class ImportSettings {
     this.codesColumns = List.copyOf(b.codesColumns);
     this.coderColumn = Optional.ofNullable(b.coderColumn);
     this.metaColumns = List.copyOf(b.metaColumns);
+    this.skippedColumns = List.copyOf(b.skippedColumns);
     this.maxBytes = b.maxBytes;
     this.maxProblems = b.maxProblems;
   }
@@ -100,6 +102,13 @@ public final class ImportSettings {
     return metaColumns;
   }
 
+  /**
+   * Returns the header names of the columns not to import, whatever detection would make of them.
+   */
+  public List<String> skippedColumns() {
+    return skippedColumns;
+  }
+
   /** Returns the largest input accepted, in bytes. */
   public long maxBytes() {
     return maxBytes;
@@ -119,6 +128,7 @@ public final class ImportSettings {
     named.put(Builder.CODES, codesColumns);
     named.put(Builder.CODER, coderColumn.map(List::of).orElse(List.of()));
     named.put(Builder.META, metaColumns);
+    named.put(Builder.SKIP, skippedColumns);
     return named;
   }
 
@@ -148,6 +158,7 @@ public final class ImportSettings {
     static final String CODES = "--codes-column";
     static final String CODER = "--coder-column";
     static final String META = "--meta-column";
+    static final String SKIP = "--skip-column";
 
     private Delimiter delimiter;
     private Charset encoding;
@@ -157,6 +168,7 @@ public final class ImportSettings {
     private final List<String> codesColumns = new ArrayList<>();
     private String coderColumn;
     private final List<String> metaColumns = new ArrayList<>();
+    private final List<String> skippedColumns = new ArrayList<>();
     private long maxBytes = DEFAULT_MAX_BYTES;
     private int maxProblems = DEFAULT_MAX_PROBLEMS;
 
@@ -232,6 +244,12 @@ public final class ImportSettings {
       return this;
     }
 
+    /** Adds a column not to import, by header name; repeatable. */
+    public Builder skippedColumn(String header) {
+      skippedColumns.add(checkName(header, SKIP));
+      return this;
+    }
+
     /** Sets the largest input accepted, in bytes; must be positive. */
     public Builder maxBytes(long maxBytes) {
       this.maxBytes = maxBytes;
@@ -262,6 +280,7 @@ public final class ImportSettings {
       dedupe(textColumns);
       dedupe(codesColumns);
       dedupe(metaColumns);
+      dedupe(skippedColumns);
       ImportSettings settings = new ImportSettings(this);
       Map<String, String> optionByName = new LinkedHashMap<>();
       for (Map.Entry<String, List<String>> e : settings.namedColumns().entrySet()) {

@@ -12,7 +12,9 @@ import riffle.model.ColumnRole;
  * Gives every column a role: named columns get the role they were named for; the others are
  * detected from their header and from a sample of the first {@value #SAMPLE} rows.
  *
- * <p>Naming any column for a role switches detection of that role off. Otherwise, in this order:
+ * <p>Naming any column for a role switches detection of that role off; a skipped column is {@link
+ * ColumnRole#IGNORED} and leaves detection of the other columns as it was. Otherwise, in this
+ * order:
  *
  * <ol>
  *   <li><b>CODER</b>: header with the word coder(s) or annotator, or "coded by".
@@ -288,6 +290,8 @@ final class RoleDetector {
         return ColumnRole.CODER;
       case ImportSettings.Builder.META:
         return ColumnRole.META;
+      case ImportSettings.Builder.SKIP:
+        return ColumnRole.IGNORED;
       default:
         throw new IllegalStateException("unknown option " + option);
     }

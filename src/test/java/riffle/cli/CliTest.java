@@ -307,7 +307,7 @@ class CliTest {
 
   @Test
   void everyCommandHasHelp() {
-    for (String command : List.of("import", "info", "demo")) {
+    for (String command : List.of("import", "info", "demo", "serve")) {
       Run run = riffle(command, "--help");
       assertEquals(0, run.code(), command);
       assertTrue(run.out().contains("Usage: riffle " + command), run.out());

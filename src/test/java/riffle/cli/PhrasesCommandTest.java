@@ -16,7 +16,7 @@ class PhrasesCommandTest {
 
   @BeforeAll
   static void demo() {
-    CliTest.Run run = CliTest.riffle("demo", "--dir", dir.toString(), "--json");
+    CliTest.Run run = CliTest.riffle("demo", "--dir", dir.toString(), "--no-serve", "--json");
     assertEquals(0, run.code(), run.err());
     project = dir.resolve("demo.riffle").toString();
   }

@@ -1,0 +1,81 @@
+package riffle.web;
+
+import io.javalin.http.Context;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Objects;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import riffle.model.InputException;
+import riffle.model.InputProblem;
+
+/**
+ * Turns every failure into one JSON shape, {@code {"error": "...", "where": {...}}}: bad input is
+ * 4xx with its message (and, where it has one, the source, line and column); anything unexpected is
+ * 500 with a generic message, logged by its type and stack only — never its message, which may
+ * quote an answer.
+ */
+final class Errors {
+  private static final Logger LOG = LoggerFactory.getLogger(Errors.class);
+
+  private Errors() {}
+
+  /** The body of an error answer. */
+  static Map<String, Object> body(String message, Map<String, Object> where) {
+    Map<String, Object> body = new LinkedHashMap<>();
+    body.put("error", message);
+    body.put("where", where);
+    return body;
+  }
+
+  /** The JSON body for a failure, with its status; used for requests and for import jobs. */
+  static Failure of(Exception e) {
+    if (e instanceof ApiError a) {
+      return new Failure(a.status(), body(a.getMessage(), a.where()));
+    }
+    if (e instanceof InputException input) {
+      Map<String, Object> where = new LinkedHashMap<>();
+      String message = Objects.requireNonNullElse(input.getMessage(), "the input cannot be used");
+      if (input.located().isPresent()) {
+        InputProblem p = input.located().get();
+        where.put("source", p.source());
+        where.put("line", p.line());
+        where.put("column", p.column());
+        message = p.message();
+      }
+      return new Failure(input.located().isPresent() ? 400 : 422, body(message, where));
+    }
+    if (e instanceof IllegalArgumentException) {
+      return new Failure(
+          400,
+          body(Objects.requireNonNullElse(e.getMessage(), "the request is not valid"), Map.of()));
+    }
+    StackTraceElement[] stack = e.getStackTrace();
+    LOG.error(
+        "unexpected {} at {}; its message is left out of the log as it may quote an answer",
+        e.getClass().getName(),
+        stack.length > 0 ? stack[0] : "(no stack)");
+    return new Failure(
+        500,
+        body(
+            "something went wrong inside Riffle ("
+                + e.getClass().getSimpleName()
+                + "); nothing"
+                + " was half-written. Try again, and report it if it happens again.",
+            Map.of()));
+  }
+
+  /** Answers a request with the failure. */
+  static void answer(Exception e, Context ctx) {
+    Failure f = of(e);
+    ctx.status(f.status()).json(f.body());
+  }
+
+  /**
+   * A failure ready to send.
+   *
+   * @param status the HTTP status
+   * @param body the JSON body
+   */
+  record Failure(int status, Map<String, Object> body) {}
+}
