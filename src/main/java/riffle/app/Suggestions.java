@@ -50,9 +50,21 @@ final class Suggestions {
         codeIds.add(c.id());
       }
     }
+    // A wave and question brought in coded elsewhere was coded in full: its answers without codes
+    // are examples too (of no code), not only the answers that carry one.
+    Set<String> codedInFull = new HashSet<>();
+    for (ProjectStore.AnswerRow r : rows) {
+      for (Assignment a : assigned.getOrDefault(r.id(), List.of())) {
+        if (a.origin() == riffle.model.Origin.IMPORTED) {
+          codedInFull.add(r.wave() + "\u0000" + r.question());
+        }
+      }
+    }
     Map<String, List<ProjectStore.AnswerRow>> coded = new LinkedHashMap<>();
     for (ProjectStore.AnswerRow r : rows) {
-      if (r.substantive() && human(assigned.get(r.id())).size() > 0) {
+      if (r.substantive()
+          && (human(assigned.get(r.id())).size() > 0
+              || codedInFull.contains(r.wave() + "\u0000" + r.question()))) {
         coded.computeIfAbsent(r.question(), q -> new ArrayList<>()).add(r);
       }
     }
