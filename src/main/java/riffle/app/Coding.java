@@ -114,6 +114,26 @@ public final class Coding {
     return Codebook.byId(store.codes(), codeId);
   }
 
+  /** Sets the answers that show a code well (shown beside its guidance). */
+  public EditOutcome setExamples(String coder, long codeId, List<Long> answers)
+      throws InputException {
+    return store.edit(
+        coder,
+        "code-examples",
+        e -> {
+          Code c = Codebook.byId(e.codes(), codeId);
+          for (long a : answers) {
+            answerText(e, a);
+          }
+          e.putCode(c.withExamples(List.copyOf(new LinkedHashSet<>(answers))));
+          return "\""
+              + c.name()
+              + "\" has "
+              + new LinkedHashSet<>(answers).size()
+              + " example answer(s).";
+        });
+  }
+
   /** Archives a code (kept with its assignments, offered no more) or brings it back. */
   public EditOutcome archive(String coder, long codeId, boolean archived) throws InputException {
     return store.edit(

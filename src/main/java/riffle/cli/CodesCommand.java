@@ -151,6 +151,13 @@ final class CodesCommand implements Callable<Integer> {
     @Option(names = "--name", paramLabel = "NEW", description = "Its new name.")
     String rename;
 
+    @Option(
+        names = "--examples",
+        split = ",",
+        paramLabel = "ID",
+        description = "Answers that show it well (replaces the list; \"\" for none).")
+    List<String> examples;
+
     @Override
     public Integer call() throws InputException {
       return change(
@@ -159,6 +166,20 @@ final class CodesCommand implements Callable<Integer> {
           (c, coder) -> {
             Code before = c.code(code);
             Code after = c.change(coder, before.id(), fields.draft(Optional.ofNullable(rename)));
+            if (examples != null) {
+              List<Long> ids = new ArrayList<>();
+              for (String e : examples) {
+                if (!e.isBlank()) {
+                  try {
+                    ids.add(Long.parseLong(e.strip()));
+                  } catch (NumberFormatException bad) {
+                    throw new IllegalArgumentException(
+                        "--examples " + e + ": give answer ids, such as 12,31");
+                  }
+                }
+              }
+              c.setExamples(coder, after.id(), ids);
+            }
             return new EditOutcome(0, "change-code", 1, 0, "Saved \"" + after.name() + "\".");
           });
     }
