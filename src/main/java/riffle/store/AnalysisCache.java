@@ -58,6 +58,7 @@ public final class AnalysisCache implements AutoCloseable {
     p.setProperty("journal_mode", "WAL");
     p.setProperty("synchronous", "OFF");
     p.setProperty("busy_timeout", Integer.toString(ProjectStore.BUSY_TIMEOUT_MS));
+    SqliteLibrary.prepare();
     Connection c = DriverManager.getConnection("jdbc:sqlite:" + file, p);
     try (Statement s = c.createStatement()) {
       int appId = ProjectStore.pragmaInt(c, "application_id");

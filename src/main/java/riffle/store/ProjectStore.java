@@ -70,6 +70,7 @@ public final class ProjectStore implements AutoCloseable {
   private static ProjectStore open(Path file) throws ProjectFileException {
     Connection connection;
     try {
+      SqliteLibrary.prepare();
       connection = DriverManager.getConnection("jdbc:sqlite:" + file, settings());
     } catch (SQLException e) {
       throw translate(file, e);
