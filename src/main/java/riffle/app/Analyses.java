@@ -2,12 +2,12 @@ package riffle.app;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
+import java.util.stream.IntStream;
 import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.Progress;
@@ -74,19 +74,72 @@ public final class Analyses {
    */
   static Map<Long, List<Sentence>> sentences(AnalysisCache cache, List<ProjectStore.AnswerRow> rows)
       throws ProjectFileException {
-    Set<Long> ids = new HashSet<>();
-    rows.forEach(r -> ids.add(r.id()));
-    Map<Long, byte[]> cached = cache.getAll(ids, AnalysisCodec.VERSION);
+    long[] ids = new long[rows.size()];
+    List<String> masked = new ArrayList<>(rows.size());
+    for (int i = 0; i < ids.length; i++) {
+      ids[i] = rows.get(i).id();
+      masked.add(rows.get(i).masked());
+    }
+    List<List<Sentence>> sentences = sentences(cache, ids, masked, i -> rows.get(i).normalized());
     Map<Long, List<Sentence>> out = new HashMap<>(rows.size() * 2);
-    for (ProjectStore.AnswerRow r : rows) {
-      byte[] bytes = cached.get(r.id());
-      Optional<List<Sentence>> decoded =
-          bytes == null ? Optional.empty() : AnalysisCodec.decode(r.masked(), bytes);
-      out.put(
-          r.id(),
-          decoded.isPresent()
-              ? decoded.get()
-              : sentences(cache, r.id(), r.masked(), r.normalized()));
+    for (int i = 0; i < ids.length; i++) {
+      out.put(ids[i], sentences.get(i));
+    }
+    return out;
+  }
+
+  /** The NFC text of the {@code index}-th answer asked for, read only when its parse is redone. */
+  interface Normalized {
+    String text(int index) throws ProjectFileException;
+  }
+
+  /** Fewest entries worth handing to another thread. */
+  private static final int DECODE_BATCH = 4_096;
+
+  /**
+   * The sentences of the answers {@code ids} (ascending) with masked texts {@code masked}, aligned
+   * with them: cached entries are read in one range scan and decoded on all cores; entries that are
+   * missing, stale or damaged are analysed afresh in one batch and cached again.
+   */
+  static List<List<Sentence>> sentences(
+      AnalysisCache cache, long[] ids, List<String> masked, Normalized normalized)
+      throws ProjectFileException {
+    byte[][] bytes = cache.getAll(ids, AnalysisCodec.VERSION);
+    // Each task sets only its own slots; the stream's join publishes them to this thread.
+    List<List<Sentence>> out = new ArrayList<>(Collections.nCopies(ids.length, null));
+    // One contiguous part per core, each with its own decoder (a decoder shares equal strings).
+    int parts =
+        Math.max(
+            1, Math.min(Runtime.getRuntime().availableProcessors(), ids.length / DECODE_BATCH));
+    int size = (ids.length + parts - 1) / parts;
+    IntStream.range(0, parts)
+        .parallel()
+        .forEach(
+            b -> {
+              AnalysisCodec.Decoder decoder = AnalysisCodec.decoder();
+              for (int i = b * size; i < Math.min(ids.length, (b + 1) * size); i++) {
+                if (bytes[i] != null) {
+                  out.set(i, decoder.decode(masked.get(i), bytes[i]).orElse(null));
+                }
+              }
+            });
+    List<Integer> redo = new ArrayList<>();
+    List<String> texts = new ArrayList<>();
+    for (int i = 0; i < ids.length; i++) {
+      if (out.get(i) == null) {
+        redo.add(i);
+        texts.add(normalized.text(i));
+      }
+    }
+    if (!redo.isEmpty()) {
+      List<Analysis> fresh = analyzer().analyzeAll(texts, Progress.NONE);
+      List<AnalysisCache.Entry> entries = new ArrayList<>(redo.size());
+      for (int k = 0; k < redo.size(); k++) {
+        int i = redo.get(k);
+        out.set(i, fresh.get(k).sentences());
+        entries.add(entry(ids[i], out.get(i)));
+      }
+      cache.putAll(entries, AnalysisCodec.VERSION);
     }
     return out;
   }

@@ -9,7 +9,6 @@ import riffle.model.Analysis;
 import riffle.model.KeyPhrase;
 import riffle.model.PhraseReport;
 import riffle.model.Sentence;
-import riffle.model.WaveSummary;
 import riffle.phrases.PhraseDoc;
 import riffle.phrases.PhraseFilter;
 import riffle.phrases.PhraseMiner;
@@ -23,7 +22,7 @@ final class PhraseMining {
   private PhraseMining() {}
 
   static PhraseFindings run(ProjectStore store, PhraseQuery q) throws ProjectFileException {
-    List<String> waves = store.summary().waves().stream().map(WaveSummary::name).toList();
+    List<String> waves = store.waveNames();
     Optional<String> wave = q.wave().map(w -> known(w, waves, "--wave"));
     Optional<String> against = q.against().map(w -> known(w, waves, "--against"));
     List<String> questions = store.questions();
@@ -42,27 +41,31 @@ final class PhraseMining {
     List<String> waveNames = new ArrayList<>();
     wave.ifPresent(waveNames::add);
     against.ifPresent(waveNames::add);
-    List<ProjectStore.AnswerRow> rows = new ArrayList<>();
-    for (ProjectStore.AnswerRow r : store.answerRows(waveNames, question)) {
-      if (r.substantive()) {
-        rows.add(r);
-      }
+    List<ProjectStore.MinedAnswer> rows =
+        store.minedAnswers(waveNames, question, q.segments().keySet());
+    long[] ids = new long[rows.size()];
+    List<String> masked = new ArrayList<>(rows.size());
+    for (int i = 0; i < ids.length; i++) {
+      ids[i] = rows.get(i).id();
+      masked.add(rows.get(i).masked());
+    }
+    List<List<Sentence>> sentences;
+    try (AnalysisCache cache = AnalysisCache.open(store.file())) {
+      sentences = Analyses.sentences(cache, ids, masked, i -> normalized(store, ids[i]));
     }
     List<PhraseDoc> docs = new ArrayList<>(rows.size());
-    try (AnalysisCache cache = AnalysisCache.open(store.file())) {
-      Map<Long, List<Sentence>> sentences = Analyses.sentences(cache, rows);
-      for (ProjectStore.AnswerRow r : rows) {
-        Analysis analysis =
-            new Analysis(
-                r.foreign() ? "und" : "eng",
-                r.foreign(),
-                r.masked(),
-                List.of(),
-                r.foreign() ? List.of() : sentences.get(r.id()),
-                false);
-        docs.add(
-            new PhraseDoc(r.id(), r.respondent(), r.wave(), r.question(), r.segments(), analysis));
-      }
+    for (int i = 0; i < ids.length; i++) {
+      ProjectStore.MinedAnswer r = rows.get(i);
+      Analysis analysis =
+          new Analysis(
+              r.foreign() ? "und" : "eng",
+              r.foreign(),
+              r.masked(),
+              List.of(),
+              r.foreign() ? List.of() : sentences.get(i),
+              false);
+      docs.add(
+          new PhraseDoc(r.id(), r.respondent(), r.wave(), r.question(), r.segments(), analysis));
     }
     PhraseMiner miner = PhraseMiner.create(PhraseSettings.builder().limit(q.limit()).get());
     PhraseReport report = miner.mine(docs, focus);
@@ -70,6 +73,14 @@ final class PhraseMining {
         against.isPresent() ? miner.keyness(docs, focus, focus.withWave(against.get())) : List.of();
     return new PhraseFindings(
         report.answers(), wave, question, against, report.phrases(), report.clusters(), keyness);
+  }
+
+  /** The NFC text of an answer whose parse must be redone. */
+  private static String normalized(ProjectStore store, long answerId) throws ProjectFileException {
+    return store
+        .storedAnalysis(answerId)
+        .orElseThrow(() -> new IllegalStateException("answer " + answerId + " vanished"))
+        .normalized();
   }
 
   static String known(String wave, List<String> waves, String option) {

@@ -9,12 +9,9 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.Properties;
-import java.util.Set;
 
 /**
  * The derived analysis cache beside a project ({@code NAME.riffle.d/analysis.db}): each answer's
@@ -61,6 +58,7 @@ public final class AnalysisCache implements AutoCloseable {
     p.setProperty("journal_mode", "WAL");
     p.setProperty("synchronous", "OFF");
     p.setProperty("busy_timeout", Integer.toString(ProjectStore.BUSY_TIMEOUT_MS));
+    SqliteLibrary.prepare();
     Connection c = DriverManager.getConnection("jdbc:sqlite:" + file, p);
     try (Statement s = c.createStatement()) {
       int appId = ProjectStore.pragmaInt(c, "application_id");
@@ -128,19 +126,37 @@ public final class AnalysisCache implements AutoCloseable {
   }
 
   /**
-   * The cached parses of many answers at once (one pass over the cache), by answer id; answers
-   * without a parse from {@code version} are left out.
+   * The cached parses of many answers at once, aligned with {@code answerIds} (which must be in
+   * ascending order); an answer without a parse from {@code version} gets null. One range scan of
+   * the cache's primary key, merged with the ids, so reading one question of a project touches only
+   * the entries between its first and last answer.
    */
-  public Map<Long, byte[]> getAll(Set<Long> answerIds, String version) throws ProjectFileException {
-    Map<Long, byte[]> out = new HashMap<>(answerIds.size() * 2);
+  public byte[][] getAll(long[] answerIds, String version) throws ProjectFileException {
+    byte[][] out = new byte[answerIds.length][];
+    if (answerIds.length == 0) {
+      return out;
+    }
+    for (int i = 1; i < answerIds.length; i++) {
+      if (answerIds[i] <= answerIds[i - 1]) {
+        throw new IllegalArgumentException("answer ids must ascend: " + answerIds[i]);
+      }
+    }
     try (PreparedStatement ps =
-        connection.prepareStatement("SELECT answer_id, data FROM analysis WHERE version = ?")) {
-      ps.setString(1, version);
+        connection.prepareStatement(
+            "SELECT answer_id, data FROM analysis WHERE answer_id BETWEEN ? AND ?"
+                + " AND version = ? ORDER BY answer_id")) {
+      ps.setLong(1, answerIds[0]);
+      ps.setLong(2, answerIds[answerIds.length - 1]);
+      ps.setString(3, version);
       try (ResultSet rs = ps.executeQuery()) {
+        int at = 0;
         while (rs.next()) {
           long id = rs.getLong(1);
-          if (answerIds.contains(id)) {
-            out.put(id, rs.getBytes(2));
+          while (answerIds[at] < id) {
+            at++;
+          }
+          if (answerIds[at] == id) {
+            out[at] = rs.getBytes(2);
           }
         }
       }

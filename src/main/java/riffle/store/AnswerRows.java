@@ -11,11 +11,13 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /** Reads answers with everything the index and the miners need, in a few set queries. */
 final class AnswerRows {
   private AnswerRows() {}
 
+  /** Every answer after {@code afterId}, in id order, with its codes and segments. */
   static List<ProjectStore.AnswerRow> all(Connection c, long afterId) throws SQLException {
     return select(c, afterId, List.of(), null);
   }
@@ -128,6 +130,91 @@ final class AnswerRows {
                   codes.getOrDefault(id, List.of()),
                   meta.getOrDefault(rs.getLong(2), Map.of())));
         }
+      }
+    }
+    return out;
+  }
+
+  /**
+   * The substantive answers of {@code waves} (all when empty) and {@code question} (all when null),
+   * in id order, with only what mining needs: wave and question names are read once and shared, the
+   * NFC text is left out, and segments are read only for {@code segmentKeys}.
+   */
+  static List<ProjectStore.MinedAnswer> mined(
+      Connection c, List<String> waves, String question, Set<String> segmentKeys)
+      throws SQLException {
+    Map<Long, String> waveNames = names(c, "SELECT id, name FROM wave");
+    Map<Long, String> questionTexts = names(c, "SELECT id, text FROM question");
+    String waveFilter =
+        waves.isEmpty() ? "" : " AND w.name IN (" + "?,".repeat(waves.size() - 1) + "?)";
+    Map<Long, Map<String, String>> meta = new HashMap<>();
+    if (!segmentKeys.isEmpty()) {
+      try (PreparedStatement ps =
+          c.prepareStatement(
+              "SELECT m.respondent_id, m.key, m.value FROM respondent_meta m"
+                  + " JOIN respondent r ON r.id = m.respondent_id JOIN wave w ON w.id = r.wave_id"
+                  + " WHERE m.key IN ("
+                  + "?,".repeat(segmentKeys.size() - 1)
+                  + "?)"
+                  + waveFilter)) {
+        int at = 1;
+        for (String k : segmentKeys) {
+          ps.setString(at++, k);
+        }
+        for (String w : waves) {
+          ps.setString(at++, w);
+        }
+        try (ResultSet rs = ps.executeQuery()) {
+          while (rs.next()) {
+            meta.computeIfAbsent(rs.getLong(1), k -> new HashMap<>())
+                .put(rs.getString(2), rs.getString(3));
+          }
+        }
+      }
+    }
+    List<ProjectStore.MinedAnswer> out = new ArrayList<>();
+    try (PreparedStatement ps =
+        c.prepareStatement(
+            "SELECT a.id, r.id, r.external_id, r.wave_id, a.question_id,"
+                + " coalesce(a.masked, a.normalized), a.foreign_language FROM answer a"
+                + " JOIN respondent r ON r.id = a.respondent_id"
+                + (waves.isEmpty() ? "" : " JOIN wave w ON w.id = r.wave_id")
+                + " WHERE a.substantive = 1"
+                + waveFilter
+                + (question == null
+                    ? ""
+                    : " AND a.question_id = (SELECT id FROM question WHERE text = ?)")
+                + " ORDER BY a.id")) {
+      int at = 1;
+      for (String w : waves) {
+        ps.setString(at++, w);
+      }
+      if (question != null) {
+        ps.setString(at, question);
+      }
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          out.add(
+              new ProjectStore.MinedAnswer(
+                  rs.getLong(1),
+                  rs.getString(3),
+                  waveNames.get(rs.getLong(4)),
+                  questionTexts.get(rs.getLong(5)),
+                  rs.getString(6),
+                  rs.getInt(7) == 1,
+                  meta.getOrDefault(rs.getLong(2), Map.of())));
+        }
+      }
+    }
+    return out;
+  }
+
+  private static Map<Long, String> names(Connection c, String sql) throws SQLException {
+    Map<Long, String> out = new HashMap<>();
+    try (Statement s = c.createStatement();
+        ResultSet rs = s.executeQuery(sql)) {
+      while (rs.next()) {
+        out.put(rs.getLong(1), rs.getString(2));
       }
     }
     return out;

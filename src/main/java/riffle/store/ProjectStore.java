@@ -76,6 +76,7 @@ public final class ProjectStore implements AutoCloseable {
   private static ProjectStore open(Path file) throws ProjectFileException {
     Connection connection;
     try {
+      SqliteLibrary.prepare();
       connection = DriverManager.getConnection("jdbc:sqlite:" + file, settings());
     } catch (SQLException e) {
       throw translate(file, e);
@@ -310,6 +311,12 @@ public final class ProjectStore implements AutoCloseable {
     return read(c -> AnswerRows.all(c, afterId));
   }
 
+  /** Answers of some waves (all when empty) and one question (all when empty), in id order. */
+  public List<AnswerRow> answerRows(List<String> waves, Optional<String> question)
+      throws ProjectFileException {
+    return read(c -> AnswerRows.select(c, 0, waves, question.orElse(null)));
+  }
+
   /** The given answers, in id order. */
   public List<AnswerRow> answerRows(Collection<Long> ids) throws ProjectFileException {
     return read(c -> AnswerRows.byIds(c, ids));
@@ -325,10 +332,49 @@ public final class ProjectStore implements AutoCloseable {
     return read(Summaries::questions);
   }
 
-  /** Answers of some waves (all when empty) and one question (all when empty), in id order. */
-  public List<AnswerRow> answerRows(List<String> waves, Optional<String> question)
+  /**
+   * A substantive answer as phrase mining reads it.
+   *
+   * @param id the answer's id
+   * @param respondent the respondent's id from the export
+   * @param wave the wave's name
+   * @param question the question's text
+   * @param masked the masked text (the NFC text before its first analysis)
+   * @param foreign true when it is not in the analysis language
+   * @param segments the respondent's values of the segment columns asked for
+   */
+  public record MinedAnswer(
+      long id,
+      String respondent,
+      String wave,
+      String question,
+      String masked,
+      boolean foreign,
+      Map<String, String> segments) {}
+
+  /**
+   * The substantive answers of some waves (all when empty) and one question (all when empty), in id
+   * order, with the values of {@code segmentKeys} only.
+   */
+  public List<MinedAnswer> minedAnswers(
+      List<String> waves, Optional<String> question, Set<String> segmentKeys)
       throws ProjectFileException {
-    return read(c -> AnswerRows.select(c, 0, waves, question.orElse(null)));
+    return read(c -> AnswerRows.mined(c, waves, question.orElse(null), segmentKeys));
+  }
+
+  /** The waves' names, in import order. */
+  public List<String> waveNames() throws ProjectFileException {
+    return read(
+        c -> {
+          List<String> names = new ArrayList<>();
+          try (Statement s = c.createStatement();
+              ResultSet rs = s.executeQuery("SELECT name FROM wave ORDER BY position")) {
+            while (rs.next()) {
+              names.add(rs.getString(1));
+            }
+          }
+          return names;
+        });
   }
 
   /** A fingerprint that changes whenever answers, assignments or the audit log change. */

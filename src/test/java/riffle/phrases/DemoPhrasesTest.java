@@ -1,15 +1,18 @@
 package riffle.phrases;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 import java.util.TreeSet;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -29,9 +32,9 @@ import riffle.tools.SampleResponses.Theme;
 /**
  * Mining the demo waves, whose planted themes are known ({@link GeneratedAnswer#themes()}). A
  * phrase is judged by the ground truth of the answers that contain it: it is about a planted theme
- * when at least 80% of them carry that theme. The best phrases must be the buyers' reasons, every
- * planted theme must be found, clusters must join only themes the generator links, and the two
- * themes the checkout change reduced must fall in Wave 3.
+ * when at least 80% of them carry that theme. The best phrases must be planted themes, every
+ * planted theme must be reached near the top, clusters must join only themes the generator links,
+ * and the two themes the checkout change reduced must fall in Wave 3.
  */
 class DemoPhrasesTest {
   private static List<PhraseDoc> docs;
@@ -126,27 +129,20 @@ class DemoPhrasesTest {
   }
 
   /**
-   * The top of the list is what buyers give as reasons: of the 10 best phrases for each question at
-   * least 8 are what their answers are about (a planted theme, or a reason off the generator's
-   * catalogue such as "didn't want to create an account"), not the background sentences that come
-   * with any theme ("I had been looking for months"). For "What made you choose us?", whose
-   * off-catalogue answers are rare, at least 8 of the 10 are planted themes.
+   * The top of the list is what buyers give as reasons: for each question, at least 8 of the 10
+   * best phrases are about a planted theme (by the ground truth of the answers that contain them),
+   * not off-catalogue reasons nor the background sentences that come with any theme ("I had been
+   * looking for months").
    */
   @Test
-  void theBestPhrasesAreTheReasonsBuyersGive() {
+  void atLeastEightOfTheTenBestPhrasesArePlantedThemes() {
     for (Question q : Question.values()) {
       List<Phrase> top = MINER.mine(docs, question(q)).phrases().subList(0, 10);
-      int content = 0;
       int themes = 0;
       for (Phrase p : top) {
-        Truth t = truth(p, question(q));
-        content += t.content() ? 1 : 0;
-        themes += t.planted() ? 1 : 0;
+        themes += truth(p, question(q)).planted() ? 1 : 0;
       }
-      assertTrue(content >= 8, q + ": " + describe(top, q));
-      if (q == Question.CHOSE) {
-        assertTrue(themes >= 8, q + ": " + describe(top, q));
-      }
+      assertTrue(themes >= 8, q + ": " + themes + " of 10 are planted themes" + describe(top, q));
     }
   }
 
@@ -167,62 +163,117 @@ class DemoPhrasesTest {
     return b.toString();
   }
 
+  /** The share of the question's substantive demo answers that carry {@code theme}. */
+  private static double realisedShare(Theme theme) {
+    int base = 0;
+    int carrying = 0;
+    for (GeneratedWave w : SampleResponses.demoWaves()) {
+      base += w.base(theme.question());
+      for (GeneratedRespondent r : w.respondents()) {
+        GeneratedAnswer a = theme.question() == Question.STOPPED ? r.stopped() : r.chose();
+        carrying += a.themes().contains(theme.code()) ? 1 : 0;
+      }
+    }
+    return carrying / (double) base;
+  }
+
   /**
-   * Every planted theme has a phrase among the 100 best (the smallest, payment options at 7%, is
-   * worded in many ways, so each of its phrases is rare), and at least half of the 50 best are
-   * planted themes.
+   * Every planted theme that at least 5% of a question's answers carry (all of them, by the
+   * generator's catalogue) is reached at the top of the report {@code riffle phrases} shows: one of
+   * the 20 best phrases is about it, or one of the clusters is (most answers its phrases cover
+   * carry it).
    */
   @Test
-  void everyPlantedThemeIsFoundAmongTheBestPhrases() {
-    PhraseMiner hundred = PhraseMiner.create(PhraseSettings.builder().limit(100).get());
+  void everyPlantedThemeOfFivePercentIsReachedByTheReportsPhrasesOrClusters() {
     for (Question q : Question.values()) {
-      List<Phrase> top = hundred.mine(docs, question(q)).phrases();
-      assertEquals(100, top.size());
-      Set<String> found = new TreeSet<>();
-      int themes = 0;
-      for (int i = 0; i < top.size(); i++) {
-        Truth t = truth(top.get(i), question(q));
+      PhraseReport report = MINER.mine(docs, question(q));
+      Map<String, Phrase> byLabel = new HashMap<>();
+      Set<String> reached = new TreeSet<>();
+      for (int i = 0; i < report.phrases().size(); i++) {
+        Phrase p = report.phrases().get(i);
+        byLabel.put(p.phrase(), p);
+        Truth t = truth(p, question(q));
         if (t.planted()) {
-          found.add(t.theme());
-          themes += i < 50 ? 1 : 0;
+          reached.add(t.theme());
+        }
+      }
+      for (PhraseCluster c : report.clusters()) {
+        List<String> variants = new ArrayList<>();
+        for (String label : c.phrases()) {
+          variants.addAll(byLabel.get(label).variants());
+        }
+        Truth t = truth(variants, question(q));
+        if (t.planted()) {
+          reached.add(t.theme());
         }
       }
       Set<String> expected = new TreeSet<>();
       for (Theme t : SampleResponses.themes(q)) {
-        expected.add(t.code());
+        if (realisedShare(t) >= 0.05) {
+          expected.add(t.code());
+        }
       }
-      assertEquals(expected, found, q.text());
-      assertTrue(themes >= 25, q + ": " + themes + " of the 50 best phrases are planted themes");
+      assertEquals(SampleResponses.themes(q).size(), expected.size(), "catalogue of " + q);
+      assertEquals(expected, reached, q + describe(report.phrases(), q) + report.clusters());
     }
   }
 
   /**
    * Between Wave 2 and Wave 3 the shop began to show the delivery date and the warranty at
-   * checkout: phrases of those two themes fall (p &lt; 0.01), every phrase that falls that clearly
-   * belongs to one of them, and the flat themes' main phrases do not change significantly.
+   * checkout. In the keyness of Wave 3 against Wave 2 (phrases mapped to themes by the planted
+   * ground truth of their answers), each of those two themes has a phrase that falls significantly
+   * (p &lt; 0.01, negative Log Ratio), its most frequent phrase falls, and none of its phrases
+   * rises (p &lt; 0.05); the most frequent phrase of each flat theme does not change (p &ge; 0.01),
+   * and no more of the flat themes' phrases reach p &lt; 0.01 than chance would give.
    */
   @Test
   void theSiteChangeThemesFallInWave3AndFlatThemesDoNot() {
     PhraseMiner all = PhraseMiner.create(PhraseSettings.builder().limit(10_000).get());
     PhraseFilter stopped = question(Question.STOPPED);
-    List<KeyPhrase> key = all.keyness(docs, stopped.withWave("Wave 3"), stopped.withWave("Wave 2"));
-    Set<String> changed = new TreeSet<>();
-    for (Theme t : SampleResponses.SITE_CHANGE_THEMES) {
-      changed.add(t.code());
-    }
-    Set<String> fallen = new TreeSet<>();
+    PhraseFilter wave2 = stopped.withWave("Wave 2");
+    List<KeyPhrase> key = all.keyness(docs, stopped.withWave("Wave 3"), wave2);
+    Map<String, List<KeyPhrase>> byTheme = new TreeMap<>();
     for (KeyPhrase k : key) {
-      if (k.direction().equals("less") && k.p() < 0.01) {
-        Truth t = truth(List.of(k.phrase()), stopped);
-        assertTrue(t.planted() && changed.contains(t.theme()), k + " is about " + t);
-        fallen.add(t.theme());
+      Truth t = truth(List.of(k.phrase()), stopped);
+      if (t.planted()) {
+        byTheme.computeIfAbsent(t.theme(), x -> new ArrayList<>()).add(k);
       }
     }
-    assertEquals(changed, fallen, key.subList(0, 12).toString());
-    for (String flat : List.of("price", "shipping cost", "made me a bit nervous")) {
-      KeyPhrase k = key.stream().filter(x -> x.phrase().equals(flat)).findFirst().orElseThrow();
-      assertTrue(k.p() > 0.05, k.toString());
+    int flat = 0;
+    List<KeyPhrase> chance = new ArrayList<>();
+    for (Theme theme : SampleResponses.themes(Question.STOPPED)) {
+      List<KeyPhrase> phrases = byTheme.getOrDefault(theme.code(), List.of());
+      assertFalse(phrases.isEmpty(), theme.code() + " has no phrase in the keyness list");
+      if (SampleResponses.SITE_CHANGE_THEMES.contains(theme)) {
+        KeyPhrase main =
+            phrases.stream()
+                .max(Comparator.comparingInt((KeyPhrase k) -> k.focus() + k.reference()))
+                .orElseThrow();
+        assertTrue(main.logRatio() < 0, theme.code() + ": " + main);
+        assertTrue(
+            phrases.stream().anyMatch(k -> k.p() < 0.01 && k.logRatio() < 0),
+            theme.code() + ": " + phrases);
+        for (KeyPhrase k : phrases) {
+          assertFalse(k.p() < 0.05 && k.logRatio() > 0, theme.code() + " rises: " + k);
+        }
+      } else {
+        KeyPhrase main =
+            phrases.stream()
+                .max(Comparator.comparingInt((KeyPhrase k) -> k.focus() + k.reference()))
+                .orElseThrow();
+        // 0.05 shared among the seven flat themes (Bonferroni): 0.007, taken as 0.01
+        assertTrue(main.p() >= 0.01, theme.code() + " is flat, yet " + main);
+        flat += phrases.size();
+        for (KeyPhrase k : phrases) {
+          if (k.p() < 0.01) {
+            chance.add(k);
+          }
+        }
+      }
     }
+    // With no adjustment for multiple comparisons, about 1% of the flat themes' phrases reach
+    // p < 0.01 by chance alone; allow twice that, rounded up.
+    assertTrue(chance.size() <= Math.ceil(0.02 * flat), chance + " of " + flat + " flat phrases");
   }
 
   /**
