@@ -13,6 +13,7 @@ import java.util.Objects;
  * @param logRatio Hardie's Log Ratio: log2 of the ratio of the shares of answers containing it (1:
  *     twice the share in the focus; a zero count taken as 0.5)
  * @param p the p-value of the log-likelihood (chi-square, one degree of freedom)
+ * @param pAdjusted {@code p} adjusted by Benjamini–Hochberg across every phrase compared
  * @param direction "more" when its share is at least as high in the focus, else "less"
  */
 public record KeyPhrase(
@@ -22,6 +23,7 @@ public record KeyPhrase(
     double logLikelihood,
     double logRatio,
     double p,
+    double pAdjusted,
     String direction) {
   /** Checks the components. */
   public KeyPhrase {

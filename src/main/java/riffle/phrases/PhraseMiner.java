@@ -13,6 +13,7 @@ import riffle.model.Phrase;
 import riffle.model.PhraseCluster;
 import riffle.model.PhraseExample;
 import riffle.model.PhraseReport;
+import riffle.stats.BenjaminiHochberg;
 import riffle.stats.ChiSquare;
 import riffle.stats.Keyness;
 import riffle.stats.LogLikelihood;
@@ -159,6 +160,17 @@ public final class PhraseMiner {
       long b = mining.grams.answers(s.node(), 1);
       ll.put(s.node(), LogLikelihood.g2(a, c - a, b, d - b));
     }
+    // Hundreds of phrases are compared at once: adjust their p-values (Benjamini and Hochberg
+    // 1995).
+    double[] raw = new double[scored.size()];
+    for (int i = 0; i < raw.length; i++) {
+      raw[i] = ChiSquare.upperTailDf1(ll.get(scored.get(i).node()));
+    }
+    double[] adjusted = BenjaminiHochberg.adjust(raw);
+    Map<Integer, Double> adjustedOf = new LinkedHashMap<>();
+    for (int i = 0; i < raw.length; i++) {
+      adjustedOf.put(scored.get(i).node(), adjusted[i]);
+    }
     scored.sort(
         Comparator.comparingDouble((Mining.Scored s) -> -ll.get(s.node()))
             .thenComparing(Mining.Scored::stems)
@@ -178,6 +190,7 @@ public final class PhraseMiner {
               g2,
               ratio,
               ChiSquare.upperTailDf1(g2),
+              adjustedOf.get(node),
               a * (double) d >= b * (double) c ? "more" : "less"));
     }
     out.sort(

@@ -106,8 +106,10 @@
  * d − b]] — the exact statistic for "contains it or not", which the two-term form of Rayson and
  * Garside (2000), meant for token counts, approaches only for rare phrases — with its p-value from
  * the chi-square distribution with one degree of freedom, and the effect size is Hardie's (2014)
- * Log Ratio log2((a/c)/(b/d)), a zero count taken as 0.5. Key phrases are listed by log-likelihood,
- * then label, each with its direction ("more" or "less" in the focus).
+ * Log Ratio log2((a/c)/(b/d)), a zero count taken as 0.5. Each p-value is also given adjusted by
+ * Benjamini and Hochberg (1995) across every candidate compared, since hundreds are compared at
+ * once and a few reach p &lt; 0.01 by chance. Key phrases are listed by log-likelihood, then label,
+ * each with its direction ("more" or "less" in the focus).
  *
  * <h2>Determinism and speed</h2>
  *

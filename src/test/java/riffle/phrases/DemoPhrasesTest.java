@@ -253,6 +253,7 @@ class DemoPhrasesTest {
         assertTrue(
             phrases.stream().anyMatch(k -> k.p() < 0.01 && k.logRatio() < 0),
             theme.code() + ": " + phrases);
+
         for (KeyPhrase k : phrases) {
           assertFalse(k.p() < 0.05 && k.logRatio() > 0, theme.code() + " rises: " + k);
         }
@@ -268,12 +269,16 @@ class DemoPhrasesTest {
           if (k.p() < 0.01) {
             chance.add(k);
           }
+          assertTrue(k.pAdjusted() >= 0.05, theme.code() + " is flat, yet after adjustment " + k);
         }
       }
     }
     // With no adjustment for multiple comparisons, about 1% of the flat themes' phrases reach
     // p < 0.01 by chance alone; allow twice that, rounded up.
     assertTrue(chance.size() <= Math.ceil(0.02 * flat), chance + " of " + flat + " flat phrases");
+    for (KeyPhrase k : key) {
+      assertTrue(k.pAdjusted() >= k.p(), "an adjusted p is never below its p: " + k);
+    }
   }
 
   /**
