@@ -253,6 +253,38 @@ public final class CodingEdit {
     write(() -> step(Table.RULE, key, RowImages.read(c, Table.RULE, key), Optional.empty(), null));
   }
 
+  /** The copy board's items of one slot, in order. */
+  public List<BoardRow> boardSlot(String slot) throws ProjectFileException {
+    return read(() -> BoardRows.slot(c, slot));
+  }
+
+  /** An id no board item has. */
+  public long newBoardItemId() throws ProjectFileException {
+    return read(() -> Summaries.number(c, "SELECT coalesce(max(id), 0) + 1 FROM board_item"));
+  }
+
+  /** Pins or updates a board item. */
+  public void putBoardItem(BoardRow item) throws ProjectFileException {
+    Map<String, Object> key = RowImages.key(Table.BOARD, item.id());
+    Map<String, Object> image = new LinkedHashMap<>();
+    image.put("slot", item.slot());
+    image.put("position", (long) item.position());
+    image.put("answer_id", item.answerId());
+    image.put("code", item.code());
+    image.put("text", item.text());
+    image.put("working_line", item.workingLine().orElse(null));
+    write(
+        () ->
+            step(Table.BOARD, key, RowImages.read(c, Table.BOARD, key), Optional.of(image), null));
+  }
+
+  /** Takes an item off the board. */
+  public void removeBoardItem(long id) throws ProjectFileException {
+    Map<String, Object> key = RowImages.key(Table.BOARD, id);
+    write(
+        () -> step(Table.BOARD, key, RowImages.read(c, Table.BOARD, key), Optional.empty(), null));
+  }
+
   /** Adds a particular of the change to its audit-log row. */
   public void note(String key, Object value) {
     detail.put(key, value);

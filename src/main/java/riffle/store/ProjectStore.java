@@ -452,6 +452,11 @@ public final class ProjectStore implements AutoCloseable {
         });
   }
 
+  /** Every item of the copy board, by slot and position. */
+  public List<BoardRow> board() throws ProjectFileException {
+    return read(BoardRows::all);
+  }
+
   /** The codebook, in order. */
   public List<Code> codes() throws ProjectFileException {
     return read(CodingRows::codes);

@@ -46,7 +46,11 @@ final class RowImages {
             "origin",
             "created_at")),
     RULE("code_rule", List.of("id"), List.of("code_id", "query", "author", "created_at")),
-    EXAMPLE("code_example", List.of("code_id", "answer_id"), List.of());
+    EXAMPLE("code_example", List.of("code_id", "answer_id"), List.of()),
+    BOARD(
+        "board_item",
+        List.of("id"),
+        List.of("slot", "position", "answer_id", "code", "text", "working_line"));
 
     final String sql;
     final List<String> keys;
