@@ -75,6 +75,7 @@ final class Clauses {
   static Cut cut(Analysis analysis, Vocabulary vocabulary) {
     List<Piece> out = new ArrayList<>();
     List<int[]> clauses = new ArrayList<>();
+    Set<Long> made = new java.util.HashSet<>(); // trimming can make two runs the same piece
     for (Sentence s : analysis.sentences()) {
       List<Token> toks = s.tokens();
       List<int[]> segments = segments(toks);
@@ -93,7 +94,7 @@ final class Clauses {
                   vocabulary,
                   base + i,
                   base + j);
-          if (p != null) {
+          if (p != null && made.add(((long) p.start() << 32) | p.end())) {
             out.add(p);
           }
         }
@@ -177,7 +178,7 @@ final class Clauses {
       int firstClause,
       int lastClause) {
     int a = from;
-    if (a + 1 < to && toks.get(a + 1).text().equals(":") && Words.isWord(toks.get(a))) {
+    if (a + 1 < toks.size() && toks.get(a + 1).text().equals(":") && Words.isWord(toks.get(a))) {
       a += 2; // a heading word such as "Simple:" or "Reason:"
     }
     while (a < to
