@@ -68,8 +68,9 @@ final class Clauses {
    * @param pieces the quotable pieces, in text order
    * @param clauses the content word ids of every clause of the answer, quotable or not, in text
    *     order (ascending and distinct within a clause)
+   * @param content the content word ids of the whole answer, ascending and distinct
    */
-  record Cut(List<Piece> pieces, List<int[]> clauses) {}
+  record Cut(List<Piece> pieces, List<int[]> clauses, int[] content) {}
 
   /** The pieces and clauses of an answer; none for an answer without sentences. */
   static Cut cut(Analysis analysis, Vocabulary vocabulary) {
@@ -78,10 +79,18 @@ final class Clauses {
     Set<Long> made = new java.util.HashSet<>(); // trimming can make two runs the same piece
     for (Sentence s : analysis.sentences()) {
       List<Token> toks = s.tokens();
+      Facts f = new Facts(toks, vocabulary);
       List<int[]> segments = segments(toks);
       int base = clauses.size();
       for (int[] seg : segments) {
-        clauses.add(contentOf(toks, seg[0], seg[1], vocabulary));
+        int[] ids = new int[seg[1] - seg[0]];
+        int n = 0;
+        for (int i = seg[0]; i < seg[1]; i++) {
+          if (f.content[i]) {
+            ids[n++] = f.id[i];
+          }
+        }
+        clauses.add(distinct(ids, n));
       }
       for (int i = 0; i < segments.size(); i++) {
         for (int j = i; j < segments.size() && j - i < MAX_RUN; j++) {
@@ -89,9 +98,9 @@ final class Clauses {
               piece(
                   analysis.masked(),
                   toks,
+                  f,
                   segments.get(i)[0],
                   segments.get(j)[1],
-                  vocabulary,
                   base + i,
                   base + j);
           if (p != null && made.add(((long) p.start() << 32) | p.end())) {
@@ -100,18 +109,17 @@ final class Clauses {
         }
       }
     }
-    return new Cut(out, clauses);
-  }
-
-  private static int[] contentOf(List<Token> toks, int from, int to, Vocabulary vocabulary) {
-    int[] ids = new int[to - from];
-    int n = 0;
-    for (int i = from; i < to; i++) {
-      if (Words.isContent(toks.get(i))) {
-        ids[n++] = vocabulary.id(toks.get(i));
-      }
+    int total = 0;
+    for (int[] c : clauses) {
+      total += c.length;
     }
-    return distinct(ids, n);
+    int[] all = new int[total];
+    int k = 0;
+    for (int[] c : clauses) {
+      System.arraycopy(c, 0, all, k, c.length);
+      k += c.length;
+    }
+    return new Cut(out, clauses, distinct(all, total));
   }
 
   /** Clause boundaries as token ranges [from, to). */
@@ -169,30 +177,71 @@ final class Clauses {
   }
 
   /** The piece over tokens [from, to), trimmed; null when nothing quotable is left. */
+  /** What the score reads from each token of a sentence, worked out once per sentence. */
+  private static final class Facts {
+    final int[] id;
+    final boolean[] word;
+    final boolean[] content;
+    final boolean[] placeholder;
+    final boolean[] counted;
+    final boolean[] firstPerson;
+    final boolean[] number;
+    final boolean[] name;
+    final boolean[] verb;
+    final boolean[] explaining;
+    final double[] polarity;
+
+    Facts(List<Token> toks, Vocabulary vocabulary) {
+      int n = toks.size();
+      id = new int[n];
+      word = new boolean[n];
+      content = new boolean[n];
+      placeholder = new boolean[n];
+      counted = new boolean[n];
+      firstPerson = new boolean[n];
+      number = new boolean[n];
+      name = new boolean[n];
+      verb = new boolean[n];
+      explaining = new boolean[n];
+      polarity = new double[n];
+      for (int i = 0; i < n; i++) {
+        Token t = toks.get(i);
+        placeholder[i] = Words.isPlaceholder(t);
+        word[i] = Words.isWord(t);
+        if (!word[i] || placeholder[i]) {
+          id[i] = -1;
+          continue;
+        }
+        String w = Words.lower(t);
+        id[i] = vocabulary.id(t);
+        content[i] = Words.isContent(t);
+        counted[i] = !t.text().startsWith("'");
+        firstPerson[i] = Words.FIRST_PERSON.contains(w);
+        number[i] = t.pos().equals("CD") || hasDigit(w);
+        name[i] = t.pos().startsWith("NNP") && i > 0 && !w.equals("i");
+        verb[i] = t.pos().startsWith("VB") && !Words.LIGHT_VERBS.contains(w);
+        explaining[i] = Words.EXPLAINING.contains(w);
+        polarity[i] = polarity(toks, i, w, content[i]);
+      }
+    }
+  }
+
+  /** The piece over tokens [from, to), trimmed; null when nothing quotable is left. */
   private static Piece piece(
-      String masked,
-      List<Token> toks,
-      int from,
-      int to,
-      Vocabulary vocabulary,
-      int firstClause,
-      int lastClause) {
+      String masked, List<Token> toks, Facts f, int from, int to, int firstClause, int lastClause) {
     int a = from;
-    if (a + 1 < toks.size() && toks.get(a + 1).text().equals(":") && Words.isWord(toks.get(a))) {
+    if (a + 1 < toks.size() && f.word[a] && toks.get(a + 1).text().equals(":")) {
       a += 2; // a heading word such as "Simple:" or "Reason:"
     }
     while (a < to
-        && (!Words.isWord(toks.get(a))
+        && (!f.word[a]
             || LEADING_JOINERS.contains(Words.lower(toks.get(a)))
             || (LEADING_FILLERS.contains(Words.lower(toks.get(a))) && a + 1 < to))) {
       a++;
     }
     int b = to;
-    while (b > a && !Words.isWord(toks.get(b - 1))) {
-      if (b == toks.size()
-          && b - 2 >= a
-          && isTerminal(toks.get(b - 1).text())
-          && Words.isWord(toks.get(b - 2))) {
+    while (b > a && !f.word[b - 1]) {
+      if (b == toks.size() && b - 2 >= a && isTerminal(toks.get(b - 1).text()) && f.word[b - 2]) {
         break;
       }
       if (closesQuote(masked, toks.get(a).start(), toks.get(b - 1))) {
@@ -201,12 +250,6 @@ final class Clauses {
       b--;
     }
     if (b <= a) {
-      return null;
-    }
-    int start = toks.get(a).start();
-    int end = toks.get(b - 1).end();
-    String text = masked.substring(start, end);
-    if (Words.containsPlaceholder(text) || Words.looksPersonal(text)) {
       return null;
     }
     int words = 0;
@@ -221,31 +264,31 @@ final class Clauses {
     boolean explains = false;
     double polarity = 0;
     for (int i = a; i < b; i++) {
-      Token t = toks.get(i);
-      if (Words.isPlaceholder(t)) {
+      if (f.placeholder[i]) {
         return null;
       }
-      if (!Words.isWord(t)) {
+      if (!f.word[i]) {
         continue;
       }
-      String w = Words.lower(t);
-      if (!t.text().startsWith("'")) {
-        words++;
+      words += f.counted[i] ? 1 : 0;
+      stems[ns++] = f.id[i];
+      if (f.content[i]) {
+        content[nc++] = f.id[i];
       }
-      int id = vocabulary.id(t);
-      stems[ns++] = id;
-      boolean isContent = Words.isContent(t);
-      if (isContent) {
-        content[nc++] = id;
-      }
-      firstPerson |= Words.FIRST_PERSON.contains(w);
-      number |= t.pos().equals("CD") || hasDigit(w);
-      name |= t.pos().startsWith("NNP") && i > 0 && !w.equals("i");
-      verb |= t.pos().startsWith("VB") && !Words.LIGHT_VERBS.contains(w);
-      explains |= Words.EXPLAINING.contains(w) && i > a;
-      polarity += polarity(toks, i, w, isContent);
+      firstPerson |= f.firstPerson[i];
+      number |= f.number[i];
+      name |= f.name[i];
+      verb |= f.verb[i];
+      explains |= f.explaining[i] && i > a;
+      polarity += f.polarity[i];
     }
     if (nc == 0) {
+      return null;
+    }
+    int start = toks.get(a).start();
+    int end = toks.get(b - 1).end();
+    String text = masked.substring(start, end);
+    if (Words.containsPlaceholder(text) || Words.looksPersonal(text)) {
       return null;
     }
     double concreteness = ((number ? 1 : 0) + (name ? 1 : 0) + (verb ? 1 : 0)) / 3.0;

@@ -24,15 +24,19 @@ final class Ranking {
   /** An answer with what the ranking reads from it. */
   private static final class Prepared {
     final QuoteSource source;
-    final int[] content;
     final boolean quotable;
+
+    /** Indices of the active codes it carries, ascending. */
+    final int[] codes;
+
+    int[] content = new int[0];
     List<Piece> pieces = List.of();
     List<int[]> clauses = List.of();
 
-    Prepared(QuoteSource source, int[] content, boolean quotable) {
+    Prepared(QuoteSource source, boolean quotable, int[] codes) {
       this.source = source;
-      this.content = content;
       this.quotable = quotable;
+      this.codes = codes;
     }
   }
 
@@ -52,63 +56,93 @@ final class Ranking {
       Code code, boolean leaf, int answers, List<Group> groups, List<Group> heads) {}
 
   private final QuoteSettings settings;
-  private final List<Code> ranked;
-  private final Map<Long, Set<Long>> family = new HashMap<>();
-  private final Set<Long> leaves = new HashSet<>();
+
+  /** The active (not archived) codes in codebook order; a code is known by its index here. */
+  private final List<Code> codes;
+
+  /** related[x][y]: y is x, or below x, or above x. */
+  private final boolean[][] related;
+
+  /** below[x]: the indices of x and every code under it. */
+  private final boolean[][] below;
+
+  private final boolean[] leaf;
   private final List<Prepared> answers = new ArrayList<>();
+
+  /** Per code index, the answers carrying it or a code below it, in id order. */
+  private final List<List<Prepared>> members = new ArrayList<>();
+
   private final double[] idf;
   private final int vocabularySize;
-  private final Map<Long, Centroid> centroids;
+  private final Centroid[] centroids;
 
   Ranking(List<Code> codebook, List<QuoteSource> sources, QuoteSettings settings) {
     this.settings = settings;
     Map<Long, Code> active = new HashMap<>();
+    Set<Long> known = new HashSet<>();
     for (Code c : codebook) {
-      if (active.containsKey(c.id()) && !active.get(c.id()).equals(c)) {
+      if (!known.add(c.id())) {
         throw new IllegalArgumentException("the codebook holds code id " + c.id() + " twice");
       }
       if (!c.archived()) {
         active.put(c.id(), c);
       }
     }
-    Set<Long> known = new HashSet<>();
-    codebook.forEach(c -> known.add(c.id()));
     List<Code> order = new ArrayList<>(active.values());
     order.sort(Comparator.comparingInt(Code::position).thenComparingLong(Code::id));
-    for (Code c : order) {
-      family.computeIfAbsent(c.id(), k -> new HashSet<>()).add(c.id());
-      Set<Long> chain = new HashSet<>();
-      Code up = c;
-      while (up.parent().isPresent() && chain.add(up.id())) {
-        Code parent = active.get(up.parent().getAsLong());
-        if (parent == null) {
+    this.codes = List.copyOf(order);
+    int k = codes.size();
+    Map<Long, Integer> index = new HashMap<>();
+    for (int i = 0; i < k; i++) {
+      index.put(codes.get(i).id(), i);
+    }
+    below = new boolean[k][k];
+    for (int i = 0; i < k; i++) {
+      below[i][i] = true;
+      Set<Integer> chain = new HashSet<>(List.of(i));
+      Code up = codes.get(i);
+      while (up.parent().isPresent()) {
+        Integer parent = index.get(up.parent().getAsLong());
+        if (parent == null || !chain.add(parent)) {
           break;
         }
-        family.computeIfAbsent(parent.id(), k -> new HashSet<>()).add(c.id());
-        up = parent;
+        below[parent][i] = true;
+        up = codes.get(parent);
       }
     }
-    for (Code c : order) {
-      if (family.get(c.id()).size() == 1) {
-        leaves.add(c.id());
+    related = new boolean[k][k];
+    leaf = new boolean[k];
+    for (int x = 0; x < k; x++) {
+      int size = 0;
+      for (int y = 0; y < k; y++) {
+        related[x][y] = below[x][y] || below[y][x];
+        size += below[x][y] ? 1 : 0;
+      }
+      leaf[x] = size == 1;
+      members.add(new ArrayList<>());
+    }
+    boolean[] wanted = new boolean[k];
+    for (int x = 0; x < k; x++) {
+      if (settings.codes().isEmpty() || settings.codes().contains(codes.get(x).id())) {
+        for (int y = 0; y < k; y++) {
+          wanted[y] |= below[x][y];
+        }
       }
     }
-    this.ranked =
-        order.stream()
-            .filter(c -> settings.codes().isEmpty() || settings.codes().contains(c.id()))
-            .toList();
-    Set<Long> wanted = new HashSet<>();
-    ranked.forEach(c -> wanted.addAll(family.get(c.id())));
 
     List<QuoteSource> sorted = new ArrayList<>(sources);
     sorted.sort(Comparator.comparingLong(QuoteSource::answerId));
     Vocabulary vocabulary = new Vocabulary();
-    List<int[]> contents = new ArrayList<>();
+    Map<riffle.model.Analysis, Clauses.Cut> cuts = new HashMap<>();
+    Map<riffle.model.Analysis, int[]> contents = new HashMap<>();
     for (int i = 0; i < sorted.size(); i++) {
       QuoteSource s = sorted.get(i);
       if (i > 0 && sorted.get(i - 1).answerId() == s.answerId()) {
         throw new IllegalArgumentException("answer " + s.answerId() + " is given twice");
       }
+      int[] carried = new int[s.codes().size()];
+      int n = 0;
+      boolean cut = false;
       for (long code : s.codes()) {
         if (!known.contains(code)) {
           throw new IllegalArgumentException(
@@ -118,21 +152,40 @@ final class Ranking {
                   + code
                   + ", which is not in the codebook");
         }
+        Integer x = index.get(code);
+        if (x != null) {
+          carried[n++] = x;
+          cut |= wanted[x];
+        }
       }
-      int[] content = content(s, vocabulary);
-      contents.add(content);
-      Prepared p = new Prepared(s, content, passesFilters(s));
-      if (!s.analysis().foreign() && s.codes().stream().anyMatch(wanted::contains)) {
-        Clauses.Cut cut = Clauses.cut(s.analysis(), vocabulary);
-        p.pieces = cut.pieces();
-        p.clauses = cut.clauses();
+      carried = Arrays.copyOf(carried, n);
+      Arrays.sort(carried);
+      Prepared p = new Prepared(s, passesFilters(s), carried);
+      if (cut && !s.analysis().foreign()) {
+        // Identical analyses (short answers repeat a lot) are cut once: the cut depends on the
+        // analysis alone.
+        Clauses.Cut c = cuts.computeIfAbsent(s.analysis(), a -> Clauses.cut(a, vocabulary));
+        p.pieces = c.pieces();
+        p.clauses = c.clauses();
+        p.content = c.content();
+      } else {
+        p.content = contents.computeIfAbsent(s.analysis(), a -> content(a, vocabulary));
       }
       answers.add(p);
+      boolean[] counted = new boolean[k];
+      for (int x : carried) {
+        for (int up = 0; up < k; up++) {
+          if (below[up][x] && !counted[up]) {
+            counted[up] = true;
+            members.get(up).add(p);
+          }
+        }
+      }
     }
     this.vocabularySize = vocabulary.size();
     int[] df = new int[vocabularySize];
-    for (int[] c : contents) {
-      for (int t : c) {
+    for (Prepared p : answers) {
+      for (int t : p.content) {
         df[t]++;
       }
     }
@@ -142,49 +195,38 @@ final class Ranking {
     for (int t = 0; t < vocabularySize; t++) {
       idf[t] = df[t] == 0 ? 0 : Math.log(1 + answers.size() / (double) df[t]);
     }
-    this.centroids = centroids(order);
+    this.centroids = new Centroid[k];
+    int[] counts = new int[vocabularySize];
+    for (int x = 0; x < k; x++) {
+      centroids[x] = centroid(members.get(x), counts);
+    }
   }
 
-  /**
-   * The centroid of every code that is not archived, over the answers it or a code below carries.
-   */
-  private Map<Long, Centroid> centroids(List<Code> order) {
-    Map<Long, Set<Long>> upward = new HashMap<>();
-    for (Map.Entry<Long, Set<Long>> e : family.entrySet()) {
-      for (long member : e.getValue()) {
-        upward.computeIfAbsent(member, k -> new HashSet<>()).add(e.getKey());
-      }
+  /** The centroid over a code's answers; {@code counts} is all zero before and after. */
+  private Centroid centroid(List<Prepared> of, int[] counts) {
+    if (of.isEmpty()) {
+      return Centroid.EMPTY;
     }
-    Map<Long, Map<Integer, Integer>> counts = new HashMap<>();
-    Map<Long, Integer> sizes = new HashMap<>();
-    for (Prepared p : answers) {
-      Set<Long> codes = new HashSet<>();
-      for (long c : p.source.codes()) {
-        codes.addAll(upward.getOrDefault(c, Set.of()));
-      }
-      for (long c : codes) {
-        sizes.merge(c, 1, Integer::sum);
-        Map<Integer, Integer> m = counts.computeIfAbsent(c, k -> new HashMap<>());
-        for (int t : p.content) {
-          m.merge(t, 1, Integer::sum);
+    int[] touched = new int[16];
+    int n = 0;
+    for (Prepared p : of) {
+      for (int t : p.content) {
+        if (counts[t]++ == 0) {
+          if (n == touched.length) {
+            touched = Arrays.copyOf(touched, n * 2);
+          }
+          touched[n++] = t;
         }
       }
     }
-    Map<Long, Centroid> out = new HashMap<>();
-    for (Code c : order) {
-      Map<Integer, Integer> m = counts.get(c.id());
-      if (m == null) {
-        out.put(c.id(), Centroid.EMPTY);
-        continue;
-      }
-      int[] ids = m.keySet().stream().mapToInt(Integer::intValue).sorted().toArray();
-      int[] n = new int[ids.length];
-      for (int i = 0; i < ids.length; i++) {
-        n[i] = m.get(ids[i]);
-      }
-      out.put(c.id(), Centroid.of(ids, n, sizes.get(c.id()), idf));
+    int[] ids = Arrays.copyOf(touched, n);
+    Arrays.sort(ids);
+    int[] c = new int[n];
+    for (int i = 0; i < n; i++) {
+      c[i] = counts[ids[i]];
+      counts[ids[i]] = 0;
     }
-    return out;
+    return Centroid.of(ids, c, of.size(), idf);
   }
 
   private boolean passesFilters(QuoteSource s) {
@@ -199,14 +241,14 @@ final class Ranking {
     return true;
   }
 
-  private static int[] content(QuoteSource s, Vocabulary vocabulary) {
+  private static int[] content(riffle.model.Analysis analysis, Vocabulary vocabulary) {
     int n = 0;
-    for (Sentence sentence : s.analysis().sentences()) {
+    for (Sentence sentence : analysis.sentences()) {
       n += sentence.tokens().size();
     }
     int[] ids = new int[n];
     int k = 0;
-    for (Sentence sentence : s.analysis().sentences()) {
+    for (Sentence sentence : analysis.sentences()) {
       for (Token t : sentence.tokens()) {
         if (Words.isContent(t)) {
           ids[k++] = vocabulary.id(t);
@@ -219,6 +261,12 @@ final class Ranking {
   }
 
   QuoteFindings run() {
+    List<Integer> ranked = new ArrayList<>();
+    for (int x = 0; x < codes.size(); x++) {
+      if (settings.codes().isEmpty() || settings.codes().contains(codes.get(x).id())) {
+        ranked.add(x);
+      }
+    }
     List<CodeRun> runs = ranked.parallelStream().map(this::runCode).toList();
     List<CodeQuotes> perCode = new ArrayList<>();
     for (CodeRun r : runs) {
@@ -402,25 +450,21 @@ final class Ranking {
 
   // ----- one code -----
 
-  private CodeRun runCode(Code code) {
-    Set<Long> ids = family.get(code.id());
-    List<Prepared> members = new ArrayList<>();
+  private CodeRun runCode(int x) {
+    Code code = codes.get(x);
+    List<Prepared> of = members.get(x);
     int shown = 0;
-    for (Prepared p : answers) {
-      if (carries(p.source, ids)) {
-        members.add(p);
-        shown += p.quotable ? 1 : 0;
-      }
+    for (Prepared p : of) {
+      shown += p.quotable ? 1 : 0;
     }
-    Centroid own = centroids.get(code.id());
+    Centroid own = centroids[x];
     double[] centroid = own.dense(vocabularySize);
     double norm = own.norm();
-    boolean leaf = leaves.contains(code.id());
-    boolean heads = leaf && code.direction() == Direction.PRAISE;
+    boolean heads = leaf[x] && code.direction() == Direction.PRAISE;
     List<Candidate> general = new ArrayList<>();
     List<Candidate> brief = new ArrayList<>();
-    for (Prepared p : members) {
-      List<Piece> eligible = eligible(p, ids, code, own);
+    for (Prepared p : of) {
+      List<Piece> eligible = eligible(p, x, own);
       Candidate best = null;
       Candidate bestShort = null;
       for (Piece piece : eligible) {
@@ -455,30 +499,21 @@ final class Ranking {
       }
     }
     return new CodeRun(
-        code, leaf, shown, group(code.direction(), general), group(code.direction(), brief));
-  }
-
-  private static boolean carries(QuoteSource s, Set<Long> ids) {
-    for (long c : s.codes()) {
-      if (ids.contains(c)) {
-        return true;
-      }
-    }
-    return false;
+        code, leaf[x], shown, group(code.direction(), general), group(code.direction(), brief));
   }
 
   /**
-   * The pieces that may speak for the code: those overlapping its span when it has one (and any
-   * overlap); otherwise, when the answer also carries unrelated codes, those without a clause that
-   * resembles one of those codes more than this one; all pieces when no piece is left.
+   * The pieces that may speak for code {@code x}: those overlapping its span when it has one (and
+   * any overlap); otherwise, when the answer also carries unrelated codes, those without a clause
+   * that resembles one of those codes more than this one; all pieces when no piece is left.
    */
-  private List<Piece> eligible(Prepared p, Set<Long> ids, Code code, Centroid own) {
-    Span span = p.source.spans().get(code.id());
-    if (span == null) {
-      for (Map.Entry<Long, Span> e : p.source.spans().entrySet()) {
-        if (ids.contains(e.getKey())) {
-          span = e.getValue();
-          break;
+  private List<Piece> eligible(Prepared p, int x, Centroid own) {
+    Span span = null;
+    if (!p.source.spans().isEmpty()) {
+      span = p.source.spans().get(codes.get(x).id());
+      for (int c : p.codes) {
+        if (span == null && below[x][c]) {
+          span = p.source.spans().get(codes.get(c).id());
         }
       }
     }
@@ -491,14 +526,16 @@ final class Ranking {
       }
       return inside.isEmpty() ? p.pieces : inside;
     }
-    List<Centroid> others = new ArrayList<>();
-    for (long c : p.source.codes()) {
-      Set<Long> below = family.get(c);
-      if (!ids.contains(c) && below != null && !below.contains(code.id())) {
-        others.add(centroids.get(c));
+    List<Centroid> others = null;
+    for (int c : p.codes) {
+      if (!related[x][c]) {
+        if (others == null) {
+          others = new ArrayList<>();
+        }
+        others.add(centroids[c]);
       }
     }
-    if (others.isEmpty()) {
+    if (others == null) {
       return p.pieces;
     }
     boolean[] foreign = new boolean[p.clauses.size()];

@@ -1,5 +1,7 @@
 package riffle.quotes;
 
+import java.util.Arrays;
+import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 import riffle.model.PiiType;
@@ -258,24 +260,21 @@ final class Words {
   /** Whether the token is a placeholder of masked personal data, such as {@code [email]}. */
   static boolean isPlaceholder(Token t) {
     String s = t.text();
-    if (s.length() < 3 || s.charAt(0) != '[' || s.charAt(s.length() - 1) != ']') {
-      return false;
-    }
-    for (PiiType p : PiiType.values()) {
-      if (s.equals(p.placeholder())) {
-        return true;
-      }
-    }
-    return false;
+    return s.length() >= 3 && s.charAt(0) == '[' && PLACEHOLDERS.contains(s);
   }
+
+  private static final List<String> PLACEHOLDER_LIST =
+      Arrays.stream(PiiType.values()).map(PiiType::placeholder).toList();
+
+  private static final Set<String> PLACEHOLDERS = Set.copyOf(PLACEHOLDER_LIST);
 
   /** Whether the text contains any placeholder of masked personal data. */
   static boolean containsPlaceholder(String text) {
     if (text.indexOf('[') < 0) {
       return false;
     }
-    for (PiiType p : PiiType.values()) {
-      if (text.contains(p.placeholder())) {
+    for (String p : PLACEHOLDER_LIST) {
+      if (text.contains(p)) {
         return true;
       }
     }
