@@ -190,6 +190,11 @@ public final class Project implements AutoCloseable {
     return Optional.of(Suggestions.suggest(store, trained.get(), store.answerRows(answerIds)));
   }
 
+  /** Buyer quotes and the copy board. */
+  public Quotes quotes() {
+    return new Quotes(store);
+  }
+
   /** Findings and exports. */
   public Reporting reporting() {
     return new Reporting(store);
