@@ -410,13 +410,15 @@ class CodingBrowserTest {
   @Test
   void aClusterOfPhrasesBecomesACodeWithItsRule() throws Exception {
     open("phrases");
-    new Select(driver.findElement(By.id("phrases-wave"))).selectByVisibleText("Wave 3");
-    driver.findElement(By.id("phrases-go")).click();
+    // The screen mines every wave as it opens; use that result rather than asking again.
     waiting()
-        .until(d -> !d.findElements(By.cssSelector("#phrases-table tbody .make-code")).isEmpty());
+        .until(
+            d ->
+                text("#phrases-status").contains("mined")
+                    && !d.findElements(By.cssSelector("#phrases-table tbody .make-code"))
+                        .isEmpty());
     js("localStorage.setItem('riffle.coder', 'Mara')");
-    WebElement first = driver.findElement(By.cssSelector("#phrases-table tbody .make-code"));
-    first.click();
+    retrying(() -> driver.findElement(By.cssSelector("#phrases-table tbody .make-code")).click());
     WebElement form =
         waiting()
             .until(
