@@ -186,7 +186,7 @@ function svg(tag, attrs = {}, ...children) {
 function shareChart(c, waves) {
   const W = 220;
   const H = 120;
-  const pad = { l: 34, r: 10, t: 10, b: 24 };
+  const pad = { l: 34, r: 24, t: 10, b: 24 };
   const shares = waves.map((w) => c.waves[w]).filter(Boolean);
   const top = Math.max(0.1, ...shares.map((s) => s.ci.upper));
   const x = (i) => pad.l + (waves.length === 1 ? (W - pad.l - pad.r) / 2 : (i * (W - pad.l - pad.r)) / (waves.length - 1));
@@ -229,7 +229,7 @@ function heatmap(q) {
   if (used.length < 2) return h('p', { class: 'hint' }, 'Too few codes given together to draw yet.');
   const cell = 26;
   const label = 150;
-  const W = label + used.length * cell + 10;
+  const W = label + used.length * cell + 80;
   const H = label + used.length * cell + 10;
   const find = (a, b) => pooled.find((c) => (c.a === a && c.b === b) || (c.a === b && c.b === a));
   const top = Math.max(0.01, ...pooled.map((c) => c.jaccard));
