@@ -7,8 +7,9 @@ import * as find from './find.js';
 import * as phrases from './phrases.js';
 import * as coding from './coding.js';
 import * as codebook from './codebook.js';
+import * as findings from './findings.js';
 
-const screens = { bring, find, phrases, coding, codebook };
+const screens = { bring, find, phrases, coding, codebook, findings };
 const mounted = new Set();
 let summary = null;
 const listeners = [];
@@ -92,7 +93,8 @@ function typing(target) {
 document.addEventListener('keydown', (e) => {
   if (e.key === '/' && !e.ctrlKey && !e.metaKey && !e.altKey && !typing(e.target)) {
     e.preventDefault();
-    if (current() !== 'find') ctx.go('find', { focus: true });
+    if (screens[current()].slash) screens[current()].slash();
+    else if (current() !== 'find') ctx.go('find', { focus: true });
     else find.focus();
   }
 });

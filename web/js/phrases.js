@@ -1,7 +1,8 @@
 // Phrases: what buyers keep saying in their own words, the themes that travel together, and what
 // rose or fell between two waves; every phrase leads to its answers.
 import { api, query } from './api.js';
-import { h, fill, clear, count, plural } from './dom.js';
+import { h, fill, clear, count, plural, position } from './dom.js';
+import { current as coderName } from './coder.js';
 
 let ctx;
 let els;
@@ -73,7 +74,10 @@ function phraseQuery(label) {
   return `"${label.replaceAll('"', '')}"`;
 }
 
+let asked = 0;
+
 async function run() {
+  const mine = ++asked;
   ran = true;
   els.error.hidden = true;
   clear(els.error);
@@ -89,9 +93,11 @@ async function run() {
     const found = await api(
       `/api/phrases${query({ question: els.question.value, wave: els.wave.value, against: els.against.value, segment: seg || undefined, limit: 40 })}`,
     );
+    if (mine !== asked) return; // a newer request is on its way
     els.status.textContent = `${plural(found.answers, 'answer')} mined.`;
     show(found);
   } catch (e) {
+    if (mine !== asked) return;
     els.status.textContent = '';
     fill(els.error, h('strong', {}, 'Cannot show phrases: '), e.message);
     els.error.hidden = false;
@@ -135,6 +141,7 @@ function show(found) {
                     { scope: 'row' },
                     h('button', { type: 'button', class: 'link', title: p.variants.join(' · '), on: { click: () => goFind(phraseQuery(p.phrase)) } }, p.phrase),
                     p.negated ? h('span', { class: 'tag' }, 'negated') : null,
+                    h('button', { type: 'button', class: 'quiet small make-code', 'aria-label': `Make a code of \u201c${p.phrase}\u201d`, on: { click: (e) => makeCode(e.target.closest('th'), p.phrase, phraseQuery(p.phrase)) } }, 'Make a code\u2026'),
                   ),
                   h('td', { class: 'num' }, count(p.answers)),
                   waveNames.map((w) => h('td', { class: 'num' }, count(p.waves[w] || 0))),
@@ -160,7 +167,7 @@ function show(found) {
               {},
               h('p', { class: 'cluster-phrases' }, c.phrases.join(' · ')),
               h('p', { class: 'meta' }, `${plural(c.answers, 'answer')} · cohesion ${c.cohesion.toFixed(2)}`),
-              h('button', { type: 'button', class: 'quiet', on: { click: () => goFind(c.query) } }, 'Show these answers'),
+              h('div', { class: 'actions' }, h('button', { type: 'button', class: 'quiet', on: { click: () => goFind(c.query) } }, 'Show these answers'), h('button', { type: 'button', class: 'quiet make-code', on: { click: (e) => makeCode(e.target.closest('li'), c.phrases[0], c.query) } }, 'Make a code\u2026')),
             ),
           ),
         ),
@@ -203,4 +210,57 @@ function show(found) {
     );
   }
   fill(els.out, parts);
+}
+
+/**
+ * Turns a phrase or a candidate theme into a code with its rule: first shows how many answers the
+ * rule would find (and a few of them), then creates the code, saves the rule and applies it.
+ */
+function makeCode(where, label, q) {
+  where.querySelector('.make-code-form')?.remove();
+  const name = h('input', { type: 'text', class: 'make-code-name', 'aria-label': 'Name of the new code', value: label.charAt(0).toUpperCase() + label.slice(1) });
+  const rule = h('input', { type: 'text', class: 'make-code-query', 'aria-label': 'Its rule (a search)', value: q, spellcheck: 'false' });
+  const out = h('div', { 'aria-live': 'polite' });
+  const go = h('button', { type: 'button', class: 'primary make-code-go', hidden: true }, 'Create code and apply rule');
+  const preview = async () => {
+    go.hidden = true;
+    try {
+      const found = await api(`/api/search${query({ q: rule.value.trim(), limit: 3 })}`);
+      fill(out, h('p', {}, `The rule finds ${plural(found.total, 'answer')}, for example:`), h('ul', { class: 'sample' }, found.hits.map((x) => h('li', {}, x.text))));
+      go.hidden = found.total === 0;
+    } catch (e) {
+      fill(out, h('p', { class: 'error', role: 'alert' }, `${e.message}${e.where && e.where.column ? ` (${position(e.where)})` : ''}`));
+    }
+  };
+  go.addEventListener('click', async () => {
+    const coder = coderName();
+    if (!coder) {
+      fill(out, h('p', { class: 'error', role: 'alert' }, 'Say who is coding first, on the Coding or Codebook screen.'));
+      return;
+    }
+    go.disabled = true;
+    try {
+      const made = await api('/api/codes', { method: 'POST', body: { coder, name: name.value.trim() } });
+      await api('/api/rules', { method: 'POST', body: { coder, code: made.code.id, query: rule.value.trim() } });
+      const applied = await api('/api/rules/apply', { method: 'POST', body: { coder, code: made.code.id } });
+      fill(out, h('p', { class: 'done' }, `${made.message} ${applied.message}`));
+      go.hidden = true;
+      ctx.refresh();
+    } catch (e) {
+      fill(out, h('p', { class: 'error', role: 'alert' }, `Not created: ${e.message}`));
+    } finally {
+      go.disabled = false;
+    }
+  });
+  const form = h(
+    'form',
+    { class: 'make-code-form', on: { submit: (e) => { e.preventDefault(); preview(); } } },
+    h('label', {}, 'New code', name),
+    h('label', {}, 'Rule', rule),
+    h('div', { class: 'actions' }, h('button', { type: 'submit', class: 'quiet make-code-preview' }, 'Preview'), go, h('button', { type: 'button', class: 'quiet', on: { click: () => form.remove() } }, 'Cancel')),
+    out,
+  );
+  where.append(form);
+  preview();
+  name.focus();
 }

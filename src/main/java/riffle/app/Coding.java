@@ -770,6 +770,58 @@ public final class Coding {
         });
   }
 
+  /**
+   * Gives a code to every answer a query matches that lacks it, in one edit (one undo takes it all
+   * back), except answers from which a person took that code off. The assignments are marked as
+   * made by rule: nobody read each answer, so they do not teach the suggestions.
+   *
+   * @throws InputException when the query cannot be read; its problem gives the column
+   */
+  public EditOutcome assignAll(String coder, long codeId, String query) throws InputException {
+    String q = query.strip();
+    if (q.isEmpty()) {
+      throw new IllegalArgumentException("write the query whose answers should get the code");
+    }
+    long[] found = matches(q);
+    return store.edit(
+        coder,
+        "assign-all",
+        e -> {
+          Code c = usable(e, codeId);
+          Set<Long> has = new HashSet<>();
+          for (Assignment a : e.assignmentsOfCode(codeId)) {
+            has.add(a.answerId());
+          }
+          Set<Long> vetoed = new HashSet<>(e.vetoes(codeId));
+          int given = 0;
+          int keptOff = 0;
+          for (long answer : found) {
+            if (has.contains(answer)) {
+              continue;
+            }
+            if (vetoed.contains(answer)) {
+              keptOff++;
+              continue;
+            }
+            e.putAssignment(
+                new Assignment(answer, codeId, Optional.empty(), coder, Origin.RULE, e.at()));
+            given++;
+          }
+          e.note("code", c.name());
+          e.note("query", q);
+          e.note("coded", given);
+          e.note("kept_off", keptOff);
+          return "Gave \""
+              + c.name()
+              + "\" to "
+              + given
+              + " answer(s) matching "
+              + q
+              + (keptOff > 0 ? "; " + keptOff + " left alone where a person removed it" : "")
+              + ".";
+        });
+  }
+
   private long[] matches(String query) throws InputException {
     try {
       return project.index().matches(query, store.questions());

@@ -205,6 +205,11 @@ public final class Project implements AutoCloseable {
     return new Coding(store, this);
   }
 
+  /** Pages through the answers for coding. */
+  public AnswerBrowser answers() {
+    return new AnswerBrowser(store, this);
+  }
+
   /** The open index, brought up to date with the project first. */
   AnswerIndex index() throws InputException {
     if (index == null) {

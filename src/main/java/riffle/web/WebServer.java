@@ -18,6 +18,7 @@ import riffle.app.ImportPreview;
 import riffle.app.ImportReport;
 import riffle.app.ImportRequest;
 import riffle.app.PhraseQuery;
+import riffle.app.SuggestionTrainer;
 import riffle.model.InputException;
 
 /**
@@ -90,10 +91,17 @@ public final class WebServer implements AutoCloseable {
   private final ProjectAccess access;
   private final URI url;
   private final Optional<String> token;
+  private final SuggestionTrainer trainer;
 
-  private WebServer(Javalin app, ProjectAccess access, URI url, Optional<String> token) {
+  private WebServer(
+      Javalin app,
+      ProjectAccess access,
+      SuggestionTrainer trainer,
+      URI url,
+      Optional<String> token) {
     this.app = app;
     this.access = access;
+    this.trainer = trainer;
     this.url = url;
     this.token = token;
   }
@@ -118,10 +126,15 @@ public final class WebServer implements AutoCloseable {
     Guard guard = new Guard(options.host(), token);
     ProjectAccess access = ProjectAccess.open(project, options.waitMillis());
     Imports imports = new Imports();
+    SuggestionTrainer trainer = new SuggestionTrainer(project);
+    CodingRoutes coding = new CodingRoutes(access, trainer);
     Javalin app;
     try {
-      app = Javalin.create(cfg -> configure(cfg, options, guard, new Api(access, imports))).start();
+      app =
+          Javalin.create(cfg -> configure(cfg, options, guard, new Api(access, imports), coding))
+              .start();
     } catch (RuntimeException e) {
+      trainer.close();
       access.close();
       throw new IllegalStateException(
           "cannot listen on " + options.host() + ":" + options.port() + " (" + e.getMessage() + ")",
@@ -129,7 +142,8 @@ public final class WebServer implements AutoCloseable {
     }
     guard.bound(app.port());
     String host = options.host().contains(":") ? "[" + options.host() + "]" : options.host();
-    return new WebServer(app, access, URI.create("http://" + host + ":" + app.port() + "/"), token);
+    return new WebServer(
+        app, access, trainer, URI.create("http://" + host + ":" + app.port() + "/"), token);
   }
 
   private static String newToken() {
@@ -138,7 +152,8 @@ public final class WebServer implements AutoCloseable {
     return Base64.getUrlEncoder().withoutPadding().encodeToString(bytes);
   }
 
-  private static void configure(JavalinConfig cfg, Options options, Guard guard, Api api) {
+  private static void configure(
+      JavalinConfig cfg, Options options, Guard guard, Api api, CodingRoutes coding) {
     cfg.startup.showJavalinBanner = false;
     cfg.startup.showOldJavalinVersionWarning = false;
     cfg.jetty.host = options.host();
@@ -166,6 +181,7 @@ public final class WebServer implements AutoCloseable {
     cfg.routes.get("/api/search", api::search);
     cfg.routes.get("/api/answers/{id}/similar", api::similar);
     cfg.routes.get("/api/phrases", api::phrases);
+    coding.register(cfg);
     cfg.routes.exception(Exception.class, Errors::answer);
     cfg.routes.error(
         404,
@@ -210,6 +226,7 @@ public final class WebServer implements AutoCloseable {
   @Override
   public void close() {
     app.stop();
+    trainer.close();
     access.close();
   }
 

@@ -186,8 +186,7 @@ class WebBrowserTest {
 
   @Test
   void aHostileAnswerIsShownAsText() throws Exception {
-    open("coding");
-    shot("coding");
+    open("phrases");
     driver.findElement(By.tagName("body")).sendKeys("/");
     waiting().until(d -> d.switchTo().activeElement().getDomAttribute("id").equals("find-query"));
     driver.switchTo().activeElement().sendKeys("onerror OR \"delivery date\"", Keys.ENTER);

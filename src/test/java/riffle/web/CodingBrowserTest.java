@@ -1,0 +1,435 @@
+package riffle.web;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.OptionalLong;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.openqa.selenium.By;
+import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.Keys;
+import org.openqa.selenium.NoAlertPresentException;
+import org.openqa.selenium.OutputType;
+import org.openqa.selenium.TakesScreenshot;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.interactions.Actions;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+import org.openqa.selenium.support.ui.Select;
+import org.openqa.selenium.support.ui.WebDriverWait;
+import riffle.app.ImportRequest;
+import riffle.app.ImportSource;
+import riffle.app.Project;
+import riffle.model.Code;
+import riffle.model.Progress;
+
+/**
+ * The coding workbench in Debian's Chromium, headless, over a project holding the precoded pilot
+ * (so suggestions have human-coded examples) and demo waves 2 and 3 (coded by a rule, so the
+ * findings have a change to report): a pasted wave coded by keyboard, undo, a suggestion accepted,
+ * everything still there after a reload; the codebook, findings and phrases screens.
+ */
+@Tag("browser")
+class CodingBrowserTest {
+  @TempDir static Path dir;
+  static WebServer server;
+  static ChromeDriver driver;
+  static Path profile;
+  static final Path SHOTS = Path.of("target", "screenshots");
+
+  /** A pasted wave of twelve answers, the seventh hostile. */
+  static final String PASTE =
+      "respondent\tplan\tWhat almost stopped you from ordering?\n"
+          + "P-01\tbasic\tThe delivery date was not clear until the last step\n"
+          + "P-02\tplus\tI was not sure the warranty covered the grinder burrs\n"
+          + "P-03\tbasic\tThe price was higher than a new machine on sale\n"
+          + "P-04\tplus\tShipping cost more than I expected\n"
+          + "P-05\tbasic\tNo idea when it would arrive\n"
+          + "P-06\tplus\tThe warranty page would not load on my phone\n"
+          + "P-07\tbasic\t"
+          + WebServerTest.HOSTILE
+          + "\n"
+          + "P-08\tplus\tToo expensive for a refurbished grinder\n"
+          + "P-09\tbasic\tThe delivery window was two weeks wide\n"
+          + "P-10\tplus\tWorried the steam wand was worn\n"
+          + "P-11\tbasic\tThe checkout asked for my phone number twice\n"
+          + "P-12\tplus\tNothing really, it was easy\n";
+
+  @BeforeAll
+  static void start() throws Exception {
+    Path project = dir.resolve("shop.riffle");
+    Project.importInto(
+        project,
+        ImportRequest.from(new ImportSource.File(Path.of("sample-responses/precoded-pilot.tsv")))
+            .wave("Pilot")
+            .get(),
+        Progress.NONE);
+    for (String w : List.of("2", "3")) {
+      Project.importInto(
+          project,
+          ImportRequest.from(new ImportSource.File(Path.of("sample-responses/wave-" + w + ".csv")))
+              .wave("Wave " + w)
+              .get(),
+          Progress.NONE);
+    }
+    try (Project p = Project.openExisting(project)) {
+      Code warranty = p.coding().code("warranty doubts");
+      p.coding().addRule("setup", warranty.id(), "warranty AND question:1");
+      p.coding().applyRules("setup", OptionalLong.of(warranty.id()));
+    }
+    server = WebServer.start(project, WebServer.Options.defaults().webDir(Path.of("web")));
+    profile = Files.createTempDirectory("riffle-chromium-");
+    ChromeOptions options = new ChromeOptions();
+    options.setBinary("/usr/bin/chromium");
+    options.addArguments(
+        "--headless=new",
+        "--no-sandbox",
+        "--disable-dev-shm-usage",
+        "--disable-gpu",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--no-first-run",
+        "--window-size=1280,1100",
+        "--user-data-dir=" + profile);
+    ChromeDriverService service =
+        new ChromeDriverService.Builder()
+            .usingDriverExecutable(new File("/usr/bin/chromedriver"))
+            .usingAnyFreePort()
+            .build();
+    driver = new ChromeDriver(service, options);
+    Files.createDirectories(SHOTS);
+  }
+
+  @AfterAll
+  static void stop() throws IOException {
+    if (driver != null) {
+      driver.quit();
+    }
+    if (server != null) {
+      server.close();
+    }
+    if (profile != null) {
+      try (Stream<Path> files = Files.walk(profile)) {
+        files.sorted(Comparator.reverseOrder()).map(Path::toFile).forEach(File::delete);
+      }
+    }
+  }
+
+  static WebDriverWait waiting() {
+    return (WebDriverWait)
+        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+  }
+
+  static void open(String screen) {
+    driver.get("about:blank");
+    driver.get(server.url().resolve("/#" + screen).toString());
+    waiting()
+        .until(
+            d ->
+                !d.findElement(By.id("project-counts")).getText().isEmpty()
+                    && d.findElement(By.id("screen-" + screen)).isDisplayed());
+  }
+
+  static void shot(String name) throws IOException {
+    Path png = ((TakesScreenshot) driver).getScreenshotAs(OutputType.FILE).toPath();
+    Files.copy(png, SHOTS.resolve(name + ".png"), StandardCopyOption.REPLACE_EXISTING);
+  }
+
+  static void keys(CharSequence... keys) {
+    new Actions(driver).sendKeys(keys).perform();
+  }
+
+  static Object js(String script, Object... args) {
+    return ((JavascriptExecutor) driver).executeScript(script, args);
+  }
+
+  /** The names on the chips of the answer shown. */
+  @SuppressWarnings("unchecked")
+  static List<String> chips() {
+    return (List<String>)
+        js(
+            "return [...document.querySelectorAll('#coding-codes .chip .chip-name')]"
+                + ".map(e => e.textContent)");
+  }
+
+  static String answerText() {
+    return text("#coding-text");
+  }
+
+  /** The text of the first element matching a selector, read in one step ("" when none). */
+  static String text(String css) {
+    Object t =
+        js("const e = document.querySelector(arguments[0]); return e ? e.textContent : '';", css);
+    return String.valueOf(t);
+  }
+
+  /** Runs a step again when the page redrew the element it used meanwhile. */
+  static void retrying(Runnable step) {
+    for (int i = 0; ; i++) {
+      try {
+        step.run();
+        return;
+      } catch (org.openqa.selenium.StaleElementReferenceException e) {
+        if (i > 20) {
+          throw e;
+        }
+      }
+    }
+  }
+
+  static void saved() {
+    waiting().until(d -> !d.findElement(By.id("coding-saving")).getText().startsWith("Saving"));
+    waiting().until(d -> d.findElements(By.cssSelector("#coding-codes .chip.pending")).isEmpty());
+  }
+
+  static void showWave(String wave, String state) {
+    new Select(driver.findElement(By.id("coding-wave"))).selectByVisibleText(wave);
+    new Select(driver.findElement(By.id("coding-state"))).selectByValue(state);
+    driver.findElement(By.id("coding-go")).click();
+    waiting()
+        .until(
+            d ->
+                text("#coding-card-title").contains(wave)
+                    && !text("#coding-saving").startsWith("Saving"));
+  }
+
+  @Test
+  void aPastedWaveIsCodedByKeyboardAndEverythingSurvivesAReload() throws Exception {
+    // Bring in the wave by paste, with a column role changed.
+    open("bring");
+    js(
+        "arguments[0].value = arguments[1];"
+            + " arguments[0].dispatchEvent(new Event('input', {bubbles: true}));",
+        driver.findElement(By.id("bring-paste")),
+        PASTE);
+    driver.findElement(By.id("bring-read")).click();
+    waiting().until(ExpectedConditions.visibilityOfElementLocated(By.id("bring-table")));
+    new Select(driver.findElement(By.cssSelector("select.role[data-column='plan']")))
+        .selectByValue("ignored");
+    WebElement wave = driver.findElement(By.id("bring-wave-name"));
+    wave.clear();
+    wave.sendKeys("Wave 5");
+    driver.findElement(By.id("bring-go")).click();
+    waiting().until(ExpectedConditions.visibilityOfElementLocated(By.id("bring-done")));
+    assertTrue(driver.findElement(By.id("bring-done")).getText().contains("12 answers added"));
+
+    // Three codes, typed into the codebook's form.
+    open("codebook");
+    WebElement who = driver.findElement(By.id("codebook-coder-name"));
+    who.sendKeys("Mara", Keys.ENTER);
+    waiting().until(d -> d.findElement(By.id("codebook-coder")).getText().contains("Mara"));
+    String[][] made = {{"Delivery timing", "d"}, {"Price worries", "p"}, {"Checkout trouble", "c"}};
+    for (String[] c : made) {
+      driver.findElement(By.id("code-name")).sendKeys(c[0]);
+      driver.findElement(By.id("code-key")).sendKeys(c[1]);
+      new Select(driver.findElement(By.id("code-direction"))).selectByValue("friction");
+      driver.findElement(By.id("code-name")).sendKeys(Keys.ENTER);
+      waiting()
+          .until(
+              d ->
+                  String.valueOf(
+                          js(
+                              "return [...document.querySelectorAll('#codebook-codes tbody th')]"
+                                  + ".map(e => e.textContent).join('|')"))
+                      .contains(c[0]));
+    }
+    driver.findElement(By.id("code-name")).sendKeys("Price worries", Keys.ENTER);
+    WebElement refused =
+        waiting()
+            .until(ExpectedConditions.visibilityOfElementLocated(By.id("codebook-form-error")));
+    assertTrue(refused.getText().contains("Price worries"), refused.getText());
+    driver.findElement(By.id("code-name")).clear();
+    shot("codebook");
+
+    // Ten answers coded by keyboard only: a code key, then j.
+    open("coding");
+    showWave("Wave 5", "");
+    assertTrue(
+        driver.findElement(By.id("coding-progress")).getText().startsWith("2 of 12"),
+        driver.findElement(By.id("coding-progress")).getText());
+    String[] plan = {"d", "c", "p", "p", "d", "c", "c", "p", "d", "c"};
+    List<String> texts = new ArrayList<>();
+    for (int i = 0; i < plan.length; i++) {
+      texts.add(answerText());
+      keys(plan[i]);
+      String want =
+          plan[i].equals("d") ? made[0][0] : plan[i].equals("p") ? made[1][0] : made[2][0];
+      waiting().until(d -> chips().contains(want));
+      if (i == 6) {
+        assertEquals(WebServerTest.HOSTILE, answerText(), "the hostile answer is shown as text");
+        assertEquals(List.of(), driver.findElements(By.cssSelector("#coding-work img")));
+        assertThrows(NoAlertPresentException.class, () -> driver.switchTo().alert());
+      }
+      if (i < plan.length - 1) {
+        keys("j");
+        int n = i + 2;
+        waiting().until(d -> text("#coding-card-title").startsWith("Answer " + n + " of"));
+      }
+    }
+    saved();
+    assertTrue(
+        driver.findElement(By.id("coding-progress")).getText().startsWith("10 of 12"),
+        driver.findElement(By.id("coding-progress")).getText());
+    shot("coding-focus");
+
+    // Undo the last one: its code goes, the other nine stay.
+    keys("z");
+    waiting().until(d -> chips().isEmpty());
+    saved();
+    waiting().until(d -> d.findElement(By.id("coding-progress")).getText().startsWith("9 of 12"));
+
+    // Words selected in the answer, then a key: the code carries those words.
+    keys("k");
+    waiting().until(d -> text("#coding-card-title").startsWith("Answer 9"));
+    js(
+        "const t = document.getElementById('coding-text').firstChild;"
+            + " const r = document.createRange(); r.setStart(t, 4); r.setEnd(t, 19);"
+            + " const s = getSelection(); s.removeAllRanges(); s.addRange(r);");
+    keys("p");
+    waiting().until(d -> !d.findElements(By.cssSelector("#coding-text mark")).isEmpty());
+    assertEquals("delivery window", text("#coding-text mark"));
+    saved();
+    keys("j");
+
+    // The list view shows the same answers and codes.
+    driver.findElement(By.id("coding-view-list")).click();
+    waiting().until(d -> d.findElements(By.cssSelector("#coding-list .coding-row")).size() == 12);
+    shot("coding-list");
+    driver.findElement(By.id("coding-view-focus")).click();
+
+    // A suggestion, learned from the pilot's human codes, accepted with Enter.
+    showWave("Pilot", "no");
+    WebElement box = null;
+    for (int i = 0; i < 30 && box == null; i++) {
+      try {
+        box =
+            new WebDriverWait(driver, Duration.ofSeconds(i == 0 ? 45 : 3))
+                .pollingEvery(Duration.ofMillis(100))
+                .until(
+                    ExpectedConditions.presenceOfElementLocated(
+                        By.cssSelector("#coding-suggestions li.top")));
+      } catch (org.openqa.selenium.TimeoutException e) {
+        keys("j");
+      }
+    }
+    assertTrue(box != null, "some uncoded pilot answer gets a suggestion");
+    String suggested = text("#coding-suggestions li.top button").replace("Enter", "").strip();
+    assertTrue(text("#coding-suggestions li.top .confidence").matches("\\d+% sure"));
+    shot("coding-suggestion");
+    keys(Keys.ENTER);
+    waiting().until(d -> chips().contains(suggested));
+    assertTrue(text("#coding-codes").contains("accepted"), text("#coding-codes"));
+    saved();
+    String acceptedText = answerText();
+
+    // Reload: the coder, the codes, the coding and the accepted suggestion are all there.
+    driver.navigate().refresh();
+    waiting().until(d -> d.findElement(By.id("screen-coding")).isDisplayed());
+    waiting().until(d -> d.findElement(By.id("coding-coder")).getText().contains("Mara"));
+    showWave("Wave 5", "yes");
+    List<String> coded = new ArrayList<>();
+    for (int i = 0; i < 10; i++) {
+      coded.add(answerText());
+      if (answerText().equals(texts.get(8))) {
+        assertTrue(
+            chips().contains(made[1][0]) && chips().contains(made[0][0]), chips().toString());
+      }
+      assertFalse(chips().isEmpty());
+      keys("j");
+      int n = i + 2;
+      if (i < 8) {
+        waiting().until(d -> text("#coding-card-title").startsWith("Answer " + n + " of"));
+      } else {
+        break;
+      }
+    }
+    assertEquals(texts.subList(0, 9), coded, "the nine answers still coded, the undone one not");
+    new Select(driver.findElement(By.id("coding-code"))).selectByVisibleText(suggested);
+    new Select(driver.findElement(By.id("coding-wave"))).selectByVisibleText("Pilot");
+    driver
+        .findElement(By.id("coding-query"))
+        .sendKeys("\"" + acceptedText.split("[.,!?]")[0].replace("\"", "") + "\"", Keys.ENTER);
+    waiting()
+        .until(
+            d ->
+                !d.findElements(By.id("coding-text")).isEmpty()
+                    && answerText().equals(acceptedText));
+    assertTrue(chips().contains(suggested));
+  }
+
+  @Test
+  void theFindingsScreenPutsVerdictsInWordsFirst() throws Exception {
+    open("findings");
+    new Select(driver.findElement(By.id("findings-question"))).selectByValue("1");
+    driver.findElement(By.id("findings-go")).click();
+    // Waves 2 and 3 are coded by one rule only, so every code the pilot's people gave falls.
+    waiting().until(d -> text("#findings-q1-verdicts").contains("fell from Pilot to Wave 2"));
+    String words = text("#findings-q1-verdicts");
+    assertTrue(words.contains("\u201cwarranty doubts\u201d fell from Pilot to Wave 2"), words);
+    assertTrue(words.matches("(?s).*points \\(95% interval .* to .*; adjusted p .*"), words);
+    shot("findings");
+    for (String part : List.of(".small-multiples", ".heatmap", "#findings-saturation")) {
+      js("document.querySelector(arguments[0]).scrollIntoView({block: 'start'})", part);
+      shot("findings-" + part.replaceAll("[^a-z-]", ""));
+    }
+    new Select(driver.findElement(By.id("findings-from"))).selectByVisibleText("Wave 2");
+    new Select(driver.findElement(By.id("findings-to"))).selectByVisibleText("Wave 3");
+    driver.findElement(By.id("findings-go")).click();
+    waiting().until(d -> text("#screen-findings").contains("between Wave 2 and Wave 3"));
+    assertTrue(
+        text("#screen-findings")
+            .contains("\u201cwarranty doubts\u201d: no clear change from Wave 2 to Wave 3"));
+    assertFalse(driver.findElements(By.cssSelector(".share-chart svg circle")).isEmpty());
+    assertFalse(driver.findElements(By.cssSelector(".heatmap svg rect")).isEmpty());
+    assertTrue(
+        driver.findElement(By.id("findings-saturation")).getText().contains("Chao1 estimates"));
+    assertTrue(
+        driver.findElement(By.id("findings-downloads")).getText().contains("the report (HTML)"));
+    shot("findings-compared");
+  }
+
+  @Test
+  void aClusterOfPhrasesBecomesACodeWithItsRule() throws Exception {
+    open("phrases");
+    // The screen mines every wave as it opens; use that result rather than asking again.
+    waiting()
+        .until(
+            d ->
+                text("#phrases-status").contains("mined")
+                    && !d.findElements(By.cssSelector("#phrases-table tbody .make-code"))
+                        .isEmpty());
+    js("localStorage.setItem('riffle.coder', 'Mara')");
+    retrying(() -> driver.findElement(By.cssSelector("#phrases-table tbody .make-code")).click());
+    WebElement form =
+        waiting()
+            .until(
+                ExpectedConditions.visibilityOfElementLocated(By.cssSelector(".make-code-form")));
+    waiting().until(d -> form.getText().contains("The rule finds"));
+    WebElement name = form.findElement(By.className("make-code-name"));
+    name.clear();
+    name.sendKeys("Phrase theme");
+    form.findElement(By.className("make-code-go")).click();
+    waiting().until(d -> form.getText().contains("Created code \"Phrase theme\""));
+    assertTrue(form.getText().contains("answer(s) coded"), form.getText());
+    shot("phrases-make-code");
+  }
+}

@@ -1,0 +1,292 @@
+// Findings: per question, what changed between waves in words first (numbers beside them), each
+// code's share over the waves with its interval, the codes that come together, and whether coding
+// has found (nearly) all the codes there are. Charts are SVG drawn here; no library.
+import { api, query } from './api.js';
+import { h, fill, count, plural } from './dom.js';
+
+const SVG = 'http://www.w3.org/2000/svg';
+
+let ctx;
+let els;
+
+export function mount(section, context) {
+  ctx = context;
+  els = {};
+  els.question = h('select', { id: 'findings-question' });
+  els.from = h('select', { id: 'findings-from' });
+  els.to = h('select', { id: 'findings-to' });
+  els.error = h('div', { class: 'error', id: 'findings-error', role: 'alert', hidden: true });
+  els.status = h('p', { class: 'status', id: 'findings-status', 'aria-live': 'polite' });
+  els.out = h('div', { id: 'findings-out' });
+  els.downloads = h('p', { class: 'downloads', id: 'findings-downloads' });
+  fill(
+    section,
+    h('h1', { id: 'h-findings' }, 'Findings'),
+    h('p', { class: 'lead' }, 'How often each theme comes up, wave by wave, with honest intervals; what rose or fell, and whether the change is real.'),
+    h(
+      'form',
+      { class: 'filters', on: { submit: (e) => { e.preventDefault(); run(); } } },
+      h('div', { class: 'field' }, h('label', { for: 'findings-question' }, 'Question'), els.question),
+      h('div', { class: 'field' }, h('label', { for: 'findings-from' }, 'Compare'), els.from),
+      h('div', { class: 'field' }, h('label', { for: 'findings-to' }, 'with'), els.to),
+      h('div', { class: 'field end' }, h('button', { type: 'submit', class: 'primary', id: 'findings-go' }, 'Show findings')),
+    ),
+    els.downloads,
+    els.error,
+    els.status,
+    els.out,
+  );
+  ctx.onSummary(fillChoices);
+}
+
+export function shown() {
+  run();
+}
+
+function fillChoices(summary) {
+  const q = els.question.value;
+  const f = els.from.value;
+  const t = els.to.value;
+  fill(els.question, h('option', { value: '' }, 'All questions'), summary.questions.map((text, i) => h('option', { value: String(i + 1), props: { selected: q === String(i + 1) } }, `${i + 1}. ${text}`)));
+  fill(els.from, h('option', { value: '' }, 'each wave'), summary.waves.map((w) => h('option', { value: w.name, props: { selected: f === w.name } }, w.name)));
+  fill(els.to, h('option', { value: '' }, 'the next'), summary.waves.map((w) => h('option', { value: w.name, props: { selected: t === w.name } }, w.name)));
+}
+
+function params() {
+  return { question: els.question.value, from: els.from.value, to: els.to.value };
+}
+
+function renderDownloads() {
+  const p = query(params());
+  const link = (href, label) => h('a', { href, download: '' }, label);
+  fill(
+    els.downloads,
+    'Download: ',
+    link(`/api/report.html${p}`, 'the report (HTML)'),
+    ' \u00b7 ',
+    link(`/api/report.md${p}`, 'Markdown'),
+    ' \u00b7 ',
+    link(`/api/export/coded.csv${query({ question: els.question.value })}`, 'coded answers (CSV)'),
+    ' \u00b7 ',
+    link(`/api/export/coded.csv${query({ question: els.question.value, shape: 'long' })}`, 'one row per code (CSV)'),
+    ' \u00b7 ',
+    link('/api/export/codebook.csv', 'codebook (CSV)'),
+  );
+}
+
+let asked = 0;
+
+async function run() {
+  const mine = ++asked;
+  els.error.hidden = true;
+  if (!!els.from.value !== !!els.to.value) {
+    fill(els.error, 'Pick both waves to compare, or neither (then each wave is compared with the next).');
+    els.error.hidden = false;
+    return;
+  }
+  renderDownloads();
+  els.status.textContent = 'Counting\u2026';
+  try {
+    const f = await api(`/api/findings${query(params())}`);
+    if (mine !== asked) return; // a newer request is on its way
+    els.status.textContent = '';
+    fill(els.out, f.questions.map(questionFindings));
+  } catch (e) {
+    if (mine !== asked) return;
+    els.status.textContent = '';
+    fill(els.error, h('strong', {}, 'Cannot show the findings: '), e.message);
+    els.error.hidden = false;
+  }
+}
+
+// ---- words and numbers ----
+
+function pct(x) {
+  return `${(x * 100).toFixed(1)}%`;
+}
+
+function signed(x) {
+  const v = (x * 100).toFixed(1);
+  return `${x > 0 ? '+' : x < 0 ? '\u2212' : ''}${v.replace('-', '')}`;
+}
+
+function points(x) {
+  return `${signed(x)} points`;
+}
+
+function pValue(p) {
+  return p < 0.001 ? '< 0.001' : p.toFixed(3);
+}
+
+const ORDER = { fell: 0, rose: 1, 'no clear change': 2, 'too few answers to tell': 3 };
+
+function sentence(c) {
+  const name = `\u201c${c.code}\u201d`;
+  switch (c.verdict) {
+    case 'rose':
+      return `${name} rose from ${c.from} to ${c.to}`;
+    case 'fell':
+      return `${name} fell from ${c.from} to ${c.to}`;
+    case 'no clear change':
+      return `${name}: no clear change from ${c.from} to ${c.to}`;
+    default:
+      return `${name}: too few answers to tell between ${c.from} and ${c.to}`;
+  }
+}
+
+function questionFindings(q, index) {
+  const id = `findings-q${index + 1}`;
+  const waves = Object.keys(q.bases);
+  const changes = [...q.changes].sort((a, b) => ORDER[a.verdict] - ORDER[b.verdict] || a.p_adjusted - b.p_adjusted);
+  const clear = changes.filter((c) => c.verdict === 'rose' || c.verdict === 'fell');
+  const rest = changes.filter((c) => c.verdict !== 'rose' && c.verdict !== 'fell');
+  return h(
+    'section',
+    { class: 'panel findings', 'aria-labelledby': id },
+    h('h2', { id }, q.question),
+    h('p', { class: 'meta' }, 'Base (substantive answers): ', waves.map((w) => `${w} ${count(q.bases[w])}`).join(' \u00b7 ')),
+    h('h3', {}, 'What changed'),
+    changes.length === 0
+      ? h('p', { class: 'hint' }, waves.length < 2 ? 'One wave only: nothing to compare yet.' : 'No codes to compare yet.')
+      : [
+          clear.length === 0 ? h('p', { class: 'verdict none' }, 'No code rose or fell clearly.') : null,
+          h('ul', { class: 'verdicts', id: `${id}-verdicts` }, clear.map(verdictItem)),
+          rest.length
+            ? h('details', { class: 'verdicts-rest' }, h('summary', {}, `${plural(rest.length, 'other comparison')}: no clear change, or too few answers`), h('ul', { class: 'verdicts' }, rest.map(verdictItem)))
+            : null,
+        ],
+    h('h3', {}, 'Share of answers, wave by wave'),
+    h('p', { class: 'hint' }, 'Each dot is the share; its bar the 95% interval (Wilson). Bases under 30 are small; an interval wider than 20 points is imprecise.'),
+    q.codes.length === 0 ? h('p', { class: 'hint' }, 'No codes given yet.') : h('div', { class: 'small-multiples' }, q.codes.map((c) => shareChart(c, waves))),
+    h('h3', {}, 'Codes that come together'),
+    heatmap(q),
+    h('h3', {}, 'Has coding found every code?'),
+    saturation(q.saturation),
+  );
+}
+
+function verdictItem(c) {
+  return h(
+    'li',
+    { class: `verdict v-${c.verdict.replaceAll(' ', '-')}` },
+    h('span', { class: 'words' }, sentence(c)),
+    h('span', { class: 'numbers' }, `${points(c.diff)} (95% interval ${signed(c.ci.lower)} to ${signed(c.ci.upper)}; adjusted p ${pValue(c.p_adjusted)})`),
+  );
+}
+
+// ---- SVG ----
+
+function svg(tag, attrs = {}, ...children) {
+  const el = document.createElementNS(SVG, tag);
+  for (const [k, v] of Object.entries(attrs)) el.setAttribute(k, String(v));
+  for (const c of children) if (c) el.append(typeof c === 'string' ? document.createTextNode(c) : c);
+  return el;
+}
+
+function shareChart(c, waves) {
+  const W = 220;
+  const H = 120;
+  const pad = { l: 34, r: 24, t: 10, b: 24 };
+  const shares = waves.map((w) => c.waves[w]).filter(Boolean);
+  const top = Math.max(0.1, ...shares.map((s) => s.ci.upper));
+  const x = (i) => pad.l + (waves.length === 1 ? (W - pad.l - pad.r) / 2 : (i * (W - pad.l - pad.r)) / (waves.length - 1));
+  const y = (v) => pad.t + (1 - v / top) * (H - pad.t - pad.b);
+  const chart = svg('svg', { viewBox: `0 0 ${W} ${H}`, width: W, height: H, role: 'img', 'aria-label': `${c.code}: ${waves.map((w) => (c.waves[w] ? `${w} ${pct(c.waves[w].share)}` : '')).join(', ')}` });
+  chart.append(svg('line', { x1: pad.l, x2: W - pad.r, y1: y(0), y2: y(0), class: 'axis' }));
+  chart.append(svg('text', { x: pad.l - 4, y: y(top) + 4, class: 'tick', 'text-anchor': 'end' }, `${Math.round(top * 100)}%`));
+  chart.append(svg('text', { x: pad.l - 4, y: y(0) + 4, class: 'tick', 'text-anchor': 'end' }, '0'));
+  const path = [];
+  waves.forEach((w, i) => {
+    const s = c.waves[w];
+    if (!s) return;
+    path.push(`${path.length ? 'L' : 'M'}${x(i).toFixed(1)},${y(s.share).toFixed(1)}`);
+    chart.append(svg('line', { x1: x(i), x2: x(i), y1: y(s.ci.lower), y2: y(s.ci.upper), class: `interval${s.small_base || s.imprecise ? ' weak' : ''}` }));
+    chart.append(svg('circle', { cx: x(i), cy: y(s.share), r: 3.5, class: 'dot' }));
+    chart.append(svg('text', { x: x(i), y: H - 8, class: 'tick', 'text-anchor': 'middle' }, w.length > 10 ? `${w.slice(0, 9)}\u2026` : w));
+  });
+  chart.insertBefore(svg('path', { d: path.join(' '), class: 'trend' }), chart.firstChild);
+  const flags = [];
+  for (const w of waves) {
+    const s = c.waves[w];
+    if (!s) continue;
+    if (s.small_base) flags.push(`small base in ${w} (${s.base})`);
+    else if (s.imprecise) flags.push(`imprecise in ${w}`);
+  }
+  const last = waves.map((w) => c.waves[w]).filter(Boolean).pop();
+  return h(
+    'figure',
+    { class: 'share-chart' },
+    h('figcaption', {}, c.parent ? `${c.parent} \u203a ` : '', h('strong', {}, c.code), last ? ` \u00b7 ${pct(last.share)} in the latest wave (${last.count} of ${last.base})` : ''),
+    chart,
+    flags.length ? h('p', { class: 'flags' }, flags.join('; ')) : null,
+  );
+}
+
+function heatmap(q) {
+  const pooled = q.cooccurrence.filter((c) => c.wave === null || c.wave === undefined);
+  const names = q.codes.filter((c) => !c.theme).map((c) => c.code);
+  const used = names.filter((n) => pooled.some((c) => c.a === n || c.b === n));
+  if (used.length < 2) return h('p', { class: 'hint' }, 'Too few codes given together to draw yet.');
+  const cell = 26;
+  const label = 150;
+  const W = label + used.length * cell + 80;
+  const H = label + used.length * cell + 10;
+  const find = (a, b) => pooled.find((c) => (c.a === a && c.b === b) || (c.a === b && c.b === a));
+  const top = Math.max(0.01, ...pooled.map((c) => c.jaccard));
+  const chart = svg('svg', { viewBox: `0 0 ${W} ${H}`, width: W, height: H, role: 'img', 'aria-label': 'How often codes are given to the same answers (Jaccard), darker is more often' });
+  used.forEach((n, i) => {
+    const short = n.length > 22 ? `${n.slice(0, 21)}\u2026` : n;
+    chart.append(svg('text', { x: label - 6, y: label + i * cell + cell / 2 + 4, class: 'tick', 'text-anchor': 'end' }, short));
+    chart.append(svg('text', { x: 0, y: 0, class: 'tick', transform: `translate(${label + i * cell + cell / 2 + 4},${label - 6}) rotate(-60)` }, short));
+  });
+  used.forEach((a, i) => {
+    used.forEach((b, j) => {
+      if (i === j) return;
+      const c = find(a, b);
+      const v = c ? c.jaccard / top : 0;
+      const rect = svg('rect', { x: label + j * cell, y: label + i * cell, width: cell - 2, height: cell - 2, class: 'heat', 'fill-opacity': (0.06 + 0.94 * v).toFixed(2) });
+      rect.append(svg('title', {}, c ? `${a} and ${b}: ${c.count} answers together, Jaccard ${c.jaccard.toFixed(2)}, lift ${c.lift.toFixed(2)}, p ${pValue(c.p)}` : `${a} and ${b}: never together`));
+      chart.append(rect);
+      if (c && c.count > 0) chart.append(svg('text', { x: label + j * cell + (cell - 2) / 2, y: label + i * cell + cell / 2 + 3, class: `cellnum${v > 0.55 ? ' light' : ''}`, 'text-anchor': 'middle' }, String(c.count)));
+    });
+  });
+  const strongest = [...pooled].filter((c) => c.lift > 1 && c.count > 0).sort((a, b) => b.jaccard - a.jaccard)[0];
+  return h(
+    'figure',
+    { class: 'heatmap' },
+    chart,
+    h('figcaption', { class: 'hint' }, 'Numbers are answers carrying both codes; darker cells share more of their answers (Jaccard).', strongest ? ` Most often together: \u201c${strongest.a}\u201d and \u201c${strongest.b}\u201d (${strongest.count} answers, ${strongest.lift.toFixed(1)}\u00d7 chance).` : ''),
+  );
+}
+
+function saturation(s) {
+  if (s.coded === 0) return h('p', { class: 'hint' }, 'No answer coded by a person yet.');
+  const W = 460;
+  const H = 180;
+  const pad = { l: 40, r: 16, t: 12, b: 30 };
+  const maxX = Math.max(1, s.coded);
+  const maxY = Math.max(1, s.observed, Number.isFinite(s.ci.upper) ? s.ci.upper : s.chao1) * 1.1;
+  const x = (v) => pad.l + (v / maxX) * (W - pad.l - pad.r);
+  const y = (v) => pad.t + (1 - v / maxY) * (H - pad.t - pad.b);
+  const chart = svg('svg', { viewBox: `0 0 ${W} ${H}`, width: W, height: H, role: 'img', 'aria-label': `Distinct codes against answers coded; Chao1 estimate ${s.chao1.toFixed(1)}` });
+  chart.append(svg('rect', { x: pad.l, width: W - pad.l - pad.r, y: y(Math.min(maxY, s.ci.upper)), height: Math.max(0, y(s.ci.lower) - y(Math.min(maxY, s.ci.upper))), class: 'band' }));
+  chart.append(svg('line', { x1: pad.l, x2: W - pad.r, y1: y(s.chao1), y2: y(s.chao1), class: 'estimate' }));
+  chart.append(svg('text', { x: W - pad.r, y: y(s.chao1) - 4, class: 'tick', 'text-anchor': 'end' }, `estimated ${s.chao1.toFixed(1)}`));
+  const d = s.curve.map((p, i) => `${i ? 'L' : 'M'}${x(p.answers).toFixed(1)},${y(p.codes).toFixed(1)}`).join(' ');
+  chart.append(svg('path', { d, class: 'curve' }));
+  chart.append(svg('line', { x1: pad.l, x2: W - pad.r, y1: y(0), y2: y(0), class: 'axis' }));
+  chart.append(svg('line', { x1: pad.l, x2: pad.l, y1: pad.t, y2: y(0), class: 'axis' }));
+  chart.append(svg('text', { x: pad.l, y: H - 8, class: 'tick' }, '0'));
+  chart.append(svg('text', { x: W - pad.r, y: H - 8, class: 'tick', 'text-anchor': 'end' }, `${count(s.coded)} answers coded`));
+  chart.append(svg('text', { x: pad.l - 6, y: y(s.observed) + 4, class: 'tick', 'text-anchor': 'end' }, String(s.observed)));
+  const words =
+    s.new_in_window === 0 && s.coded >= s.window
+      ? `The last ${s.window} coded answers brought no new code: coding looks close to complete.`
+      : `The last ${Math.min(s.window, s.coded)} coded answers brought ${plural(s.new_in_window, 'new code')}.`;
+  return h(
+    'figure',
+    { class: 'saturation', id: 'findings-saturation' },
+    h('p', {}, `${plural(s.observed, 'code')} found in ${plural(s.coded, 'coded answer')}; Chao1 estimates ${s.chao1.toFixed(1)} in all (95% interval ${s.ci.lower.toFixed(1)} to ${Number.isFinite(s.ci.upper) ? s.ci.upper.toFixed(1) : 'open'}). ${words}`),
+    chart,
+  );
+}
