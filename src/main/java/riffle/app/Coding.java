@@ -377,7 +377,17 @@ public final class Coding {
       throw new InputException(
           new InputProblem(file.toString(), 0, 0, "cannot be read (" + e.getMessage() + ")"));
     }
-    String source = file.getFileName().toString();
+    return importCodebook(coder, file.getFileName().toString(), bytes);
+  }
+
+  /**
+   * Brings in a codebook file's contents; {@code source} is its file name (its extension says CSV
+   * or JSON).
+   *
+   * @throws InputException naming the source and line of the first problem
+   */
+  public EditOutcome importCodebook(String coder, String source, byte[] bytes)
+      throws InputException {
     List<CodebookFile.Row> rows = CodebookFile.read(source, bytes, Format.of(source));
     InputException[] failed = new InputException[1];
     try {

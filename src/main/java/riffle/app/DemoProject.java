@@ -26,6 +26,10 @@ import riffle.store.ProjectStore;
 public final class DemoProject {
   static final String RESOURCES = "/riffle/sample-responses/";
   static final String MANIFEST = "demo-waves.csv";
+
+  /** The demo's codebook: the themes and directions of the pilot's codes. */
+  static final String CODEBOOK = "codebook.csv";
+
   static final String PROJECT = "demo.riffle";
   static final String FINGERPRINT = "demo.fingerprint";
 
@@ -77,6 +81,8 @@ public final class DemoProject {
                     .get(),
                 progress));
       }
+      // The pilot's codes get their themes and directions from the demo's codebook file.
+      p.coding().importCodebook("demo", CODEBOOK, resource(CODEBOOK));
     } catch (UnreadableInputException e) {
       throw new IllegalStateException("a bundled demo file is unreadable: " + e.getMessage(), e);
     }
@@ -113,6 +119,7 @@ public final class DemoProject {
     try {
       MessageDigest digest = MessageDigest.getInstance("SHA-256");
       digest.update(resource(MANIFEST));
+      digest.update(resource(CODEBOOK));
       for (Entry e : entries) {
         digest.update(resource(e.file()));
       }

@@ -106,6 +106,21 @@ final class CodesCommand implements Callable<Integer> {
     EditOutcome run(Coding coding, String coder) throws InputException;
   }
 
+  /** Runs one change to the copy board. */
+  interface BoardWork {
+    EditOutcome run(riffle.app.Quotes quotes, String coder) throws InputException;
+  }
+
+  static int quotes(CommandSpec spec, CodingOptions options, BoardWork change)
+      throws InputException {
+    EditOutcome outcome;
+    try (Project p = Project.openExisting(options.project)) {
+      outcome = change.run(p.quotes(), options.coder());
+    }
+    options.print(spec.commandLine().getOut(), outcome);
+    return 0;
+  }
+
   static int change(CommandSpec spec, CodingOptions options, Work change) throws InputException {
     EditOutcome outcome;
     try (Project p = Project.openExisting(options.project)) {

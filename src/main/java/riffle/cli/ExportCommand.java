@@ -20,21 +20,23 @@ import riffle.model.InputException;
     mixinStandardHelpOptions = true,
     description = {
       "Writes a file: the coded answers (csv: one row per answer with a 0/1 column per code, or",
-      "--long: one row per code given), the codebook (csv, json, md) or the findings (html, md,",
-      "json). Answers are always the masked text."
+      "--long: one row per code given), the codebook (csv, json, md), the findings (html, md,",
+      "json) or the copy board of quotes (md, txt, csv, json). Answers are always masked."
     })
 final class ExportCommand implements Callable<Integer> {
   enum What {
     CODED,
     CODEBOOK,
-    FINDINGS
+    FINDINGS,
+    QUOTES
   }
 
   enum Format {
     CSV,
     MD,
     JSON,
-    HTML
+    HTML,
+    TXT
   }
 
   @Spec CommandSpec spec;
@@ -46,14 +48,14 @@ final class ExportCommand implements Callable<Integer> {
       names = "--what",
       required = true,
       paramLabel = "WHAT",
-      description = "coded, codebook or findings.")
+      description = "coded, codebook, findings or quotes (the copy board).")
   What what;
 
   @Option(
       names = "--format",
       required = true,
       paramLabel = "F",
-      description = "csv, md, json or html.")
+      description = "csv, md, json, html or txt.")
   Format format;
 
   @Option(names = "--out", required = true, paramLabel = "FILE", description = "The file to write.")
@@ -96,7 +98,7 @@ final class ExportCommand implements Callable<Integer> {
                   case CSV -> (bom ? "\uFEFF" : "") + p.coding().exportCodebook("codebook.csv");
                   case JSON -> p.coding().exportCodebook("codebook.json");
                   case MD -> p.reporting().codebookMarkdown("Codebook — " + title);
-                  case HTML ->
+                  case HTML, TXT ->
                       throw new IllegalArgumentException(
                           "the codebook is written as csv, json or md");
                 };
@@ -109,9 +111,23 @@ final class ExportCommand implements Callable<Integer> {
                               .writerWithDefaultPrettyPrinter()
                               .writeValueAsString(p.reporting().findings(findings))
                           + "\n";
-                  case CSV ->
+                  case CSV, TXT ->
                       throw new IllegalArgumentException(
                           "the findings are written as html, md or json");
+                };
+            case QUOTES ->
+                switch (format) {
+                  case MD -> p.quotes().exportBoard("md");
+                  case TXT -> p.quotes().exportBoard("txt");
+                  case CSV -> (bom ? "\uFEFF" : "") + p.quotes().exportBoard("csv");
+                  case JSON ->
+                      Json.MAPPER
+                              .writerWithDefaultPrettyPrinter()
+                              .writeValueAsString(p.quotes().board())
+                          + "\n";
+                  case HTML ->
+                      throw new IllegalArgumentException(
+                          "the copy board is written as md, txt, csv or json");
                 };
           };
     } catch (com.fasterxml.jackson.core.JsonProcessingException e) {

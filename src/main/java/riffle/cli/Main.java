@@ -30,6 +30,8 @@ import picocli.CommandLine.Spec;
       HistoryCommand.class,
       SuggestCommand.class,
       ReportCommand.class,
+      QuotesCommand.class,
+      BoardCommand.class,
       ExportCommand.class,
       ServeCommand.class,
       DemoCommand.class,

@@ -1,0 +1,212 @@
+package riffle.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import riffle.app.Project;
+import riffle.model.BoardItem;
+import riffle.model.CopyBoard;
+import riffle.model.InputException;
+import riffle.model.QuoteSlot;
+
+/** {@code riffle board}: the copy board — quotes pinned into slots for page copy. */
+@Command(
+    name = "board",
+    mixinStandardHelpOptions = true,
+    description = "Shows the copy board; its subcommands pin, move, annotate and unpin quotes.",
+    subcommands = {
+      BoardCommand.Pin.class,
+      BoardCommand.Unpin.class,
+      BoardCommand.Move.class,
+      BoardCommand.Line.class
+    })
+final class BoardCommand implements Callable<Integer> {
+  @Spec CommandSpec spec;
+
+  @Option(names = "--project", paramLabel = "P", description = "Project file (to show its board).")
+  Path project;
+
+  @Mixin JsonOption json;
+
+  static String heading(QuoteSlot slot) {
+    return switch (slot) {
+      case HEADLINE -> "Headline ideas";
+      case SUBHEADLINE -> "Sub-headline ideas";
+      case BENEFIT -> "Benefit lines";
+      case OBJECTION -> "Objections to answer";
+      case PROOF -> "Proof quotes";
+    };
+  }
+
+  @Override
+  public Integer call() throws InputException {
+    if (project == null) {
+      throw new picocli.CommandLine.ParameterException(
+          spec.commandLine(), "Missing required option: '--project=P'");
+    }
+    CopyBoard board;
+    try (Project p = Project.openExisting(project)) {
+      board = p.quotes().board();
+    }
+    PrintWriter out = spec.commandLine().getOut();
+    if (json.enabled) {
+      Json.print(out, board);
+      return 0;
+    }
+    out.println(CopyBoard.CONSENT_NOTICE);
+    for (QuoteSlot slot : QuoteSlot.values()) {
+      List<BoardItem> items = board.items(slot);
+      out.printf(Locale.ROOT, "%n%s (%s)%n", heading(slot), slot.name().toLowerCase(Locale.ROOT));
+      for (int i = 0; i < items.size(); i++) {
+        BoardItem b = items.get(i);
+        out.printf(
+            Locale.ROOT,
+            "  %d. \"%s\"  (%s · #%d %s · %s)%n",
+            i + 1,
+            b.text(),
+            b.code(),
+            b.answerId(),
+            b.respondent(),
+            b.wave());
+        b.workingLine().ifPresent(l -> out.println("     → " + l));
+      }
+    }
+    return 0;
+  }
+
+  @Command(
+      name = "pin",
+      mixinStandardHelpOptions = true,
+      description = "Pins a quote (the answer's own masked words) to a slot.")
+  static final class Pin implements Callable<Integer> {
+    @Spec CommandSpec spec;
+    @Mixin CodingOptions options;
+
+    @Option(
+        names = "--slot",
+        required = true,
+        paramLabel = "SLOT",
+        description = "headline, subheadline, benefit, objection or proof.")
+    QuoteSlot slot;
+
+    @Option(
+        names = "--answer",
+        required = true,
+        paramLabel = "ID",
+        description = "The answer it comes from.")
+    long answer;
+
+    @Option(
+        names = "--text",
+        required = true,
+        paramLabel = "TEXT",
+        description = "The quote, as written in the masked answer.")
+    String text;
+
+    @Option(
+        names = "--code",
+        paramLabel = "C",
+        defaultValue = "",
+        description = "The code it stands for.")
+    String code;
+
+    @Override
+    public Integer call() throws InputException {
+      return CodesCommand.quotes(
+          spec, options, (q, coder) -> q.pin(coder, slot, answer, text, code));
+    }
+  }
+
+  @Command(
+      name = "unpin",
+      mixinStandardHelpOptions = true,
+      description = "Takes a quote off the board.")
+  static final class Unpin implements Callable<Integer> {
+    @Spec CommandSpec spec;
+    @Mixin CodingOptions options;
+
+    @Option(names = "--slot", required = true, paramLabel = "SLOT")
+    QuoteSlot slot;
+
+    @Option(
+        names = "--number",
+        required = true,
+        paramLabel = "N",
+        description = "Its number in the slot (1 = first).")
+    int number;
+
+    @Override
+    public Integer call() throws InputException {
+      return CodesCommand.quotes(spec, options, (q, coder) -> q.unpin(coder, slot, number - 1));
+    }
+  }
+
+  @Command(
+      name = "move",
+      mixinStandardHelpOptions = true,
+      description = "Moves a quote within its slot or to another.")
+  static final class Move implements Callable<Integer> {
+    @Spec CommandSpec spec;
+    @Mixin CodingOptions options;
+
+    @Option(names = "--slot", required = true, paramLabel = "SLOT")
+    QuoteSlot slot;
+
+    @Option(names = "--number", required = true, paramLabel = "N")
+    int number;
+
+    @Option(names = "--to", paramLabel = "SLOT", description = "Another slot (default: the same).")
+    QuoteSlot to;
+
+    @Option(
+        names = "--place",
+        required = true,
+        paramLabel = "N",
+        description = "Its new place (1 = first).")
+    int place;
+
+    @Override
+    public Integer call() throws InputException {
+      return CodesCommand.quotes(
+          spec,
+          options,
+          (q, coder) -> q.move(coder, slot, number - 1, to == null ? slot : to, place - 1));
+    }
+  }
+
+  @Command(
+      name = "line",
+      mixinStandardHelpOptions = true,
+      description = "Writes your working line beside a quote (the quote stays as it is).")
+  static final class Line implements Callable<Integer> {
+    @Spec CommandSpec spec;
+    @Mixin CodingOptions options;
+
+    @Option(names = "--slot", required = true, paramLabel = "SLOT")
+    QuoteSlot slot;
+
+    @Option(names = "--number", required = true, paramLabel = "N")
+    int number;
+
+    @Option(
+        names = "--text",
+        required = true,
+        paramLabel = "TEXT",
+        description = "The line (\"\" clears it).")
+    String text;
+
+    @Override
+    public Integer call() throws InputException {
+      return CodesCommand.quotes(
+          spec, options, (q, coder) -> q.workingLine(coder, slot, number - 1, Optional.of(text)));
+    }
+  }
+}
