@@ -8,8 +8,9 @@ import * as phrases from './phrases.js';
 import * as coding from './coding.js';
 import * as codebook from './codebook.js';
 import * as findings from './findings.js';
+import * as board from './board.js';
 
-const screens = { bring, find, phrases, coding, codebook, findings };
+const screens = { bring, find, phrases, coding, codebook, findings, board };
 const mounted = new Set();
 let summary = null;
 const listeners = [];

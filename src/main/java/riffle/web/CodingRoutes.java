@@ -510,7 +510,7 @@ final class CodingRoutes {
     return codeId;
   }
 
-  private static String coder(String coder) {
+  static String coder(String coder) {
     String c = coder == null ? "" : coder.strip();
     if (c.isEmpty()) {
       throw ApiError.badField("coder", "say who is coding: give your name as coder");

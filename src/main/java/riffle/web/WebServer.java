@@ -128,10 +128,12 @@ public final class WebServer implements AutoCloseable {
     Imports imports = new Imports();
     SuggestionTrainer trainer = new SuggestionTrainer(project);
     CodingRoutes coding = new CodingRoutes(access, trainer);
+    QuoteRoutes quotes = new QuoteRoutes(access);
     Javalin app;
     try {
       app =
-          Javalin.create(cfg -> configure(cfg, options, guard, new Api(access, imports), coding))
+          Javalin.create(
+                  cfg -> configure(cfg, options, guard, new Api(access, imports), coding, quotes))
               .start();
     } catch (RuntimeException e) {
       trainer.close();
@@ -153,7 +155,12 @@ public final class WebServer implements AutoCloseable {
   }
 
   private static void configure(
-      JavalinConfig cfg, Options options, Guard guard, Api api, CodingRoutes coding) {
+      JavalinConfig cfg,
+      Options options,
+      Guard guard,
+      Api api,
+      CodingRoutes coding,
+      QuoteRoutes quotes) {
     cfg.startup.showJavalinBanner = false;
     cfg.startup.showOldJavalinVersionWarning = false;
     cfg.jetty.host = options.host();
@@ -182,6 +189,7 @@ public final class WebServer implements AutoCloseable {
     cfg.routes.get("/api/answers/{id}/similar", api::similar);
     cfg.routes.get("/api/phrases", api::phrases);
     coding.register(cfg);
+    quotes.register(cfg);
     cfg.routes.exception(Exception.class, Errors::answer);
     cfg.routes.error(
         404,
