@@ -2040,7 +2040,12 @@ public final class SampleResponses {
             + " same planted probability in all waves, so a correct\nwave comparison flags those two"
             + " falls and nothing else.\n\n");
     s.append("## Files\n\n");
-    s.append("Listed in import order in `").append(MANIFEST).append("` (`file,wave,date`).\n\n");
+    s.append("Listed in import order in `").append(MANIFEST).append("` (`file,wave,date`).");
+    s.append(" `codebook.csv` is the theme\ncatalogue as a codebook file (`name,theme,direction`):")
+        .append(
+            " the demo loads it after the imports, so\nthat the pilot's imported codes sit under")
+        .append(" their themes with their directions\n(`SampleCodebookTest` checks it against the")
+        .append(" generator).\n\n");
     s.append("| file | wave | fielded from | respondents | format |\n");
     s.append("|---|---|---|---|---|\n");
     for (GeneratedWave w : waves) {
