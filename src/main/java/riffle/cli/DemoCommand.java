@@ -77,7 +77,11 @@ final class DemoCommand implements Callable<Integer> {
         Locale.ROOT,
         "%nTry:%n  riffle phrases --project %1$s --question 1%n"
             + "  riffle phrases --project %1$s --question 1 --wave \"Wave 3\" --against \"Wave 2\"%n"
-            + "  riffle search --project %1$s --query '\"delivery date\" AND wave:\"Wave 3\"'%n",
+            + "  riffle search --project %1$s --query '\"delivery date\" AND wave:\"Wave 3\"'%n"
+            + "  riffle codes --project %1$s%n"
+            + "  riffle suggest --project %1$s --wave \"Wave 1\"%n"
+            + "  riffle report --project %1$s --question 1%n"
+            + "  riffle quotes --project %1$s%n",
         result.project());
     return serve(result, out);
   }

@@ -132,10 +132,22 @@ public final class Report {
     for (ReportAnswer a : answers) {
       tally.add(a, waveIndex.get(a.wave()), settings.cooccurrencePerWave());
     }
-    List<CodeFrequency> codes = frequencies(codebook, waves, tally);
+    // Only codes given to some answer of this question are reported for it (a codebook serves
+    // every question), and a wave nobody has coded for this question yet is not compared: its
+    // zeros say nothing about its themes.
+    boolean[] used = used(codebook, waves.size(), tally);
+    boolean[] coded = new boolean[waves.size()];
+    for (ReportAnswer a : answers) {
+      if (a.substantive() && !a.codes().isEmpty()) {
+        coded[waveIndex.get(a.wave())] = true;
+      }
+    }
+    List<CodeFrequency> codes = frequencies(codebook, waves, tally, used);
     List<WaveChange> changes = new ArrayList<>();
     for (int[] pair : pairs) {
-      changes.addAll(changes(codebook, waves, tally, pair[0], pair[1]));
+      if (coded[pair[0]] && coded[pair[1]]) {
+        changes.addAll(changes(codebook, waves, tally, pair[0], pair[1], used));
+      }
     }
     List<Cooccurrence> cooccurrence = cooccurrence(codebook, waves, tally, settings);
     List<SegmentFindings> segments =
@@ -152,6 +164,17 @@ public final class Report {
         segments);
   }
 
+  /** The codes some answer of the tally carries. */
+  private static boolean[] used(Codebook codebook, int waves, Tally tally) {
+    boolean[] used = new boolean[codebook.size()];
+    for (int w = 0; w < waves; w++) {
+      for (int i = 0; i < used.length; i++) {
+        used[i] |= tally.count[w][i] > 0;
+      }
+    }
+    return used;
+  }
+
   private static Map<String, Integer> bases(List<String> waves, Tally tally) {
     Map<String, Integer> bases = new LinkedHashMap<>();
     for (int w = 0; w < waves.size(); w++) {
@@ -161,9 +184,12 @@ public final class Report {
   }
 
   private static List<CodeFrequency> frequencies(
-      Codebook codebook, List<String> waves, Tally tally) {
+      Codebook codebook, List<String> waves, Tally tally, boolean[] used) {
     List<CodeFrequency> rows = new ArrayList<>();
     for (int i = 0; i < codebook.size(); i++) {
+      if (!used[i]) {
+        continue;
+      }
       Map<String, Share> shares = new LinkedHashMap<>();
       for (int w = 0; w < waves.size(); w++) {
         shares.put(waves.get(w), share(tally.count[w][i], tally.base[w]));
@@ -193,24 +219,37 @@ public final class Report {
   }
 
   private static List<WaveChange> changes(
-      Codebook codebook, List<String> waves, Tally tally, int from, int to) {
+      Codebook codebook, List<String> waves, Tally tally, int from, int to, boolean[] used) {
     int n1 = tally.base[from];
     int n2 = tally.base[to];
     if (n1 == 0 || n2 == 0) {
       return List.of(); // nothing to compare: one wave has no answers to this question
     }
     int codes = codebook.size();
-    double[] p = new double[codes];
-    Interval[] ci = new Interval[codes];
+    List<Integer> compared = new ArrayList<>();
     for (int i = 0; i < codes; i++) {
+      if (used[i]) {
+        compared.add(i);
+      }
+    }
+    double[] p = new double[compared.size()];
+    Interval[] ci = new Interval[codes];
+    for (int k = 0; k < compared.size(); k++) {
+      int i = compared.get(k);
       int r1 = tally.count[from][i];
       int r2 = tally.count[to][i];
-      p[i] = FisherExact.twoSided(r2, n2 - r2, r1, n1 - r1);
+      p[k] = FisherExact.twoSided(r2, n2 - r2, r1, n1 - r1);
       ci[i] = Proportions.newcombe(r2, n2, r1, n1);
     }
-    double[] adjusted = BenjaminiHochberg.adjust(p);
+    double[] adjustedByRank = BenjaminiHochberg.adjust(p);
+    double[] adjusted = new double[codes];
+    double[] raw = new double[codes];
+    for (int k = 0; k < compared.size(); k++) {
+      adjusted[compared.get(k)] = adjustedByRank[k];
+      raw[compared.get(k)] = p[k];
+    }
     List<WaveChange> rows = new ArrayList<>();
-    for (int i = 0; i < codes; i++) {
+    for (int i : compared) {
       int r1 = tally.count[from][i];
       int r2 = tally.count[to][i];
       double diff = (double) r2 / n2 - (double) r1 / n1;
@@ -223,7 +262,7 @@ public final class Report {
               waves.get(to),
               diff,
               interval(ci[i]),
-              p[i],
+              raw[i],
               adjusted[i],
               verdict(r1, n1, r2, n2, adjusted[i], ci[i])));
     }
@@ -363,7 +402,8 @@ public final class Report {
               segment,
               e.getKey(),
               bases(waves, e.getValue()),
-              frequencies(codebook, waves, e.getValue())));
+              frequencies(
+                  codebook, waves, e.getValue(), used(codebook, waves.size(), e.getValue()))));
     }
     return rows;
   }

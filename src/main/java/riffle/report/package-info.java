@@ -25,11 +25,14 @@
  *
  * <h2>Changes between waves</h2>
  *
- * Each pair of neighbouring waves is compared (or the two waves the settings name), for every code,
- * when both waves have answers to the question. The difference is the later share minus the earlier
- * one, with its 95% Newcombe hybrid-score interval (Newcombe 1998, method 10) and a two-sided
- * Fisher exact p-value; the p-values of all codes compared between the same two waves are adjusted
- * by Benjamini–Hochberg. The verdict, checked in this order:
+ * A question's findings list only the codes some answer to it carries (a codebook serves every
+ * question), and a wave in which no answer to the question is coded yet is left out of the
+ * comparisons: its zeros would read as falls. Each pair of neighbouring waves is compared (or the
+ * two waves the settings name), for every code, when both waves have answers to the question. The
+ * difference is the later share minus the earlier one, with its 95% Newcombe hybrid-score interval
+ * (Newcombe 1998, method 10) and a two-sided Fisher exact p-value; the p-values of all codes
+ * compared between the same two waves are adjusted by Benjamini–Hochberg. The verdict, checked in
+ * this order:
  *
  * <ol>
  *   <li>"too few answers to tell" when either base is under {@value
