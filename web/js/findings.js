@@ -145,6 +145,9 @@ function questionFindings(q, index) {
     { class: 'panel findings', 'aria-labelledby': id },
     h('h2', { id }, q.question),
     h('p', { class: 'meta' }, 'Base (substantive answers): ', waves.map((w) => `${w} ${count(q.bases[w])}`).join(' \u00b7 ')),
+    q.not_coded && q.not_coded.length > 0
+      ? h('p', { class: 'hint' }, `Not coded yet, so left out: ${q.not_coded.join(', ')}.`)
+      : null,
     h('h3', {}, 'What changed'),
     changes.length === 0
       ? h('p', { class: 'hint' }, waves.length < 2 ? 'One wave only: nothing to compare yet.' : 'No codes to compare yet.')

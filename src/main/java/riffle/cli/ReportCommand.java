@@ -109,6 +109,9 @@ final class ReportCommand implements Callable<Integer> {
     StringBuilder bases = new StringBuilder("  Answers counted:");
     q.bases().forEach((w, n) -> bases.append(' ').append(w).append(' ').append(n).append(';'));
     out.println(bases.substring(0, bases.length() - 1));
+    if (!q.notCoded().isEmpty()) {
+      out.println("  Not coded yet, so left out: " + String.join(", ", q.notCoded()));
+    }
     if (!q.changes().isEmpty()) {
       out.println("  What changed");
       for (WaveChange c : q.changes()) {

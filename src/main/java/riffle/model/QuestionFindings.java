@@ -10,7 +10,9 @@ import java.util.Objects;
  * Everything the findings say about one question.
  *
  * @param question the question's text
- * @param bases substantive answers per wave, in wave order
+ * @param bases substantive answers per wave, in wave order (waves coded for this question only)
+ * @param notCoded the waves in which no answer to this question is coded yet: left out of every
+ *     count and comparison
  * @param codes each code's share per wave, in codebook order (a theme before its codes)
  * @param changes each code's change between the waves compared
  * @param cooccurrence pairs of codes given to the same answers
@@ -20,6 +22,7 @@ import java.util.Objects;
 public record QuestionFindings(
     String question,
     Map<String, Integer> bases,
+    List<String> notCoded,
     List<CodeFrequency> codes,
     List<WaveChange> changes,
     List<Cooccurrence> cooccurrence,
@@ -30,6 +33,7 @@ public record QuestionFindings(
     Objects.requireNonNull(question, "question");
     Objects.requireNonNull(saturation, "saturation");
     bases = Collections.unmodifiableMap(new LinkedHashMap<>(bases));
+    notCoded = List.copyOf(notCoded);
     codes = List.copyOf(codes);
     changes = List.copyOf(changes);
     cooccurrence = List.copyOf(cooccurrence);

@@ -65,6 +65,13 @@ final class HtmlReport {
     List<String> bases = new ArrayList<>();
     q.bases().forEach((wave, base) -> bases.add(esc(wave) + " " + base));
     h.append(String.join(" · ", bases)).append("</p>\n");
+    if (!q.notCoded().isEmpty()) {
+      List<String> names = new ArrayList<>();
+      q.notCoded().forEach(w -> names.add(esc(w)));
+      h.append("<p>Not coded yet, so left out: ")
+          .append(String.join(", ", names))
+          .append(".</p>\n");
+    }
 
     if (!q.changes().isEmpty()) {
       h.append("<h3>What changed</h3>\n<ul>\n");

@@ -33,6 +33,11 @@ final class MarkdownReport {
     List<String> bases = new ArrayList<>();
     q.bases().forEach((wave, base) -> bases.add(md(wave) + " " + base));
     m.append("Bases: ").append(String.join(" · ", bases)).append("\n");
+    if (!q.notCoded().isEmpty()) {
+      List<String> names = new ArrayList<>();
+      q.notCoded().forEach(w -> names.add(md(w)));
+      m.append("\nNot coded yet, so left out: ").append(String.join(", ", names)).append(".\n");
+    }
     if (!q.changes().isEmpty()) {
       m.append("\n### What changed\n\n");
       for (WaveChange c : Text.readingOrder(q)) {

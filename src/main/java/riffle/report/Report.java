@@ -121,33 +121,57 @@ public final class Report {
 
   private static QuestionFindings question(
       String question,
-      List<ReportAnswer> answers,
+      List<ReportAnswer> allAnswers,
       Codebook codebook,
-      List<String> waves,
-      Map<String, Integer> waveIndex,
-      List<int[]> pairs,
+      List<String> allWaves,
+      Map<String, Integer> allIndex,
+      List<int[]> allPairs,
       ReportSettings settings) {
+    // A wave in which no answer to this question is coded yet says nothing about its themes (its
+    // zeros would read as falls): it is named as not coded and left out of every count.
+    boolean[] coded = new boolean[allWaves.size()];
+    for (ReportAnswer a : allAnswers) {
+      if (a.substantive() && !a.codes().isEmpty()) {
+        coded[allIndex.get(a.wave())] = true;
+      }
+    }
+    List<String> waves = new ArrayList<>();
+    List<String> notCoded = new ArrayList<>();
+    for (int w = 0; w < allWaves.size(); w++) {
+      (coded[w] ? waves : notCoded).add(allWaves.get(w));
+    }
+    Map<String, Integer> waveIndex = index(waves);
+    List<ReportAnswer> answers = new ArrayList<>();
+    for (ReportAnswer a : allAnswers) {
+      if (waveIndex.containsKey(a.wave())) {
+        answers.add(a);
+      }
+    }
+    List<int[]> pairs = new ArrayList<>();
+    if (settings.from().isPresent()) {
+      for (int[] p : allPairs) {
+        if (coded[p[0]] && coded[p[1]]) {
+          pairs.add(
+              new int[] {waveIndex.get(allWaves.get(p[0])), waveIndex.get(allWaves.get(p[1]))});
+        }
+      }
+    } else {
+      for (int w = 0; w + 1 < waves.size(); w++) {
+        pairs.add(new int[] {w, w + 1});
+      }
+    }
     Tally tally =
         new Tally(codebook, waves.size(), settings.cooccurrencePerWave() ? waves.size() : 1);
     for (ReportAnswer a : answers) {
       tally.add(a, waveIndex.get(a.wave()), settings.cooccurrencePerWave());
     }
     // Only codes given to some answer of this question are reported for it (a codebook serves
-    // every question), and a wave nobody has coded for this question yet is not compared: its
-    // zeros say nothing about its themes.
+    // every question).
     boolean[] used = used(codebook, waves.size(), tally);
-    boolean[] coded = new boolean[waves.size()];
-    for (ReportAnswer a : answers) {
-      if (a.substantive() && !a.codes().isEmpty()) {
-        coded[waveIndex.get(a.wave())] = true;
-      }
-    }
     List<CodeFrequency> codes = frequencies(codebook, waves, tally, used);
     List<WaveChange> changes = new ArrayList<>();
     for (int[] pair : pairs) {
-      if (coded[pair[0]] && coded[pair[1]]) {
-        changes.addAll(changes(codebook, waves, tally, pair[0], pair[1], used));
-      }
+      changes.addAll(changes(codebook, waves, tally, pair[0], pair[1], used));
     }
     List<Cooccurrence> cooccurrence = cooccurrence(codebook, waves, tally, settings);
     List<SegmentFindings> segments =
@@ -157,6 +181,7 @@ public final class Report {
     return new QuestionFindings(
         question,
         bases(waves, tally),
+        notCoded,
         codes,
         changes,
         cooccurrence,

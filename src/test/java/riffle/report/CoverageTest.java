@@ -51,6 +51,8 @@ class CoverageTest {
         q.codes().stream().map(CodeFrequency::code).toList(),
         "the praise code belongs to another question");
     assertTrue(q.changes().isEmpty(), "an uncoded wave is not compared: " + q.changes());
+    assertEquals(List.of("Wave 2"), q.notCoded());
+    assertEquals(List.of("Wave 1"), List.copyOf(q.bases().keySet()), "nor counted");
     assertEquals(50, q.codes().get(0).waves().get("Wave 1").count());
   }
 }
