@@ -102,13 +102,13 @@ public final class Reporting {
   }
 
   /** The findings as one self-contained HTML page. */
-  public String html(FindingsQuery query, String title) throws InputException {
-    return Exports.html(findings(query), title);
+  public String html(Findings findings, String title) {
+    return Exports.html(findings, title);
   }
 
   /** The findings as Markdown. */
-  public String markdown(FindingsQuery query, String title) throws InputException {
-    return Exports.markdown(findings(query), title);
+  public String markdown(Findings findings, String title) {
+    return Exports.markdown(findings, title);
   }
 
   /**

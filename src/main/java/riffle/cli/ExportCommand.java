@@ -104,8 +104,11 @@ final class ExportCommand implements Callable<Integer> {
                 };
             case FINDINGS ->
                 switch (format) {
-                  case HTML -> p.reporting().html(findings, "Findings — " + title);
-                  case MD -> p.reporting().markdown(findings, "Findings — " + title);
+                  case HTML ->
+                      p.reporting().html(p.reporting().findings(findings), "Findings — " + title);
+                  case MD ->
+                      p.reporting()
+                          .markdown(p.reporting().findings(findings), "Findings — " + title);
                   case JSON ->
                       Json.MAPPER
                               .writerWithDefaultPrettyPrinter()

@@ -77,10 +77,10 @@ final class ReportCommand implements Callable<Integer> {
       Reporting r = p.reporting();
       findings = r.findings(query);
       if (html != null) {
-        Files.write(html, r.html(query, title));
+        Files.write(html, r.html(findings, title));
       }
       if (markdown != null) {
-        Files.write(markdown, r.markdown(query, title));
+        Files.write(markdown, r.markdown(findings, title));
       }
     }
     PrintWriter out = spec.commandLine().getOut();

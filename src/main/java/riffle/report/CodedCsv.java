@@ -130,29 +130,6 @@ final class CodedCsv {
     return csv.toString();
   }
 
-  static String codebookCsv(List<ReportCode> codebook, boolean withBom) {
-    Map<String, ReportCode> byId = new HashMap<>();
-    for (ReportCode c : codebook) {
-      byId.put(c.id(), c);
-    }
-    Csv csv =
-        new Csv(withBom)
-            .row(List.of("code_id", "code", "parent_id", "parent", "direction", "archived"));
-    for (ReportCode c : codebook) {
-      String parentId = c.parentId().orElse("");
-      ReportCode parent = byId.get(parentId);
-      csv.row(
-          List.of(
-              c.id(),
-              c.name(),
-              parentId,
-              parent == null ? "" : parent.name(),
-              c.direction(),
-              c.archived() ? "1" : "0"));
-    }
-    return csv.toString();
-  }
-
   static String codebookMarkdown(List<ReportCode> codebook, String title) {
     Map<String, List<ReportCode>> children = new HashMap<>();
     Set<String> ids = new HashSet<>();

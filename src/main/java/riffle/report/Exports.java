@@ -51,11 +51,6 @@ public final class Exports {
     return CodedCsv.longFormat(export, withBom);
   }
 
-  /** The codebook as CSV: id, name, parent id and name, direction, archived (1/0). */
-  public static String codebookCsv(List<ReportCode> codebook, boolean withBom) {
-    return CodedCsv.codebookCsv(codebook, withBom);
-  }
-
   /** The codebook as a nested Markdown list, themes above their codes. */
   public static String codebookMarkdown(List<ReportCode> codebook, String title) {
     return CodedCsv.codebookMarkdown(codebook, title);

@@ -431,13 +431,17 @@ final class CodingRoutes {
 
   void reportHtml(Context ctx) throws Exception {
     FindingsQuery query = findingsQuery(ctx);
-    String html = access.call(p -> p.reporting().html(query, title(p) + " · findings"));
+    String html =
+        access.call(
+            p -> p.reporting().html(p.reporting().findings(query), title(p) + " · findings"));
     download(ctx, "text/html; charset=utf-8", "findings.html", html);
   }
 
   void reportMarkdown(Context ctx) throws Exception {
     FindingsQuery query = findingsQuery(ctx);
-    String md = access.call(p -> p.reporting().markdown(query, title(p) + " · findings"));
+    String md =
+        access.call(
+            p -> p.reporting().markdown(p.reporting().findings(query), title(p) + " · findings"));
     download(ctx, "text/markdown; charset=utf-8", "findings.md", md);
   }
 

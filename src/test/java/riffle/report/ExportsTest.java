@@ -147,18 +147,14 @@ class ExportsTest {
 
   @Test
   void bomOptionStartsTheFileWithTheUtf8ByteOrderMark() {
-    byte[] bytes = Exports.codebookCsv(Survey.CODEBOOK, true).getBytes(StandardCharsets.UTF_8);
+    byte[] bytes = Exports.codedAnswersCsv(export("fine"), true).getBytes(StandardCharsets.UTF_8);
     assertArrayEquals(new byte[] {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF}, Arrays.copyOf(bytes, 3));
-    byte[] plain = Exports.codebookCsv(Survey.CODEBOOK, false).getBytes(StandardCharsets.UTF_8);
-    assertEquals('c', plain[0]);
+    byte[] plain = Exports.codedAnswersCsv(export("fine"), false).getBytes(StandardCharsets.UTF_8);
+    assertEquals('a', plain[0]);
   }
 
   @Test
-  void codebookAsCsvAndMarkdown() {
-    String csv = Exports.codebookCsv(Survey.CODEBOOK, false);
-    assertTrue(csv.startsWith("code_id,code,parent_id,parent,direction,archived\r\n"));
-    assertTrue(csv.contains("cost,Delivery cost,delivery,Delivery,friction,0\r\n"));
-    assertTrue(csv.contains("old,Old delivery code,delivery,Delivery,friction,1\r\n"));
+  void codebookAsMarkdown() {
     String md = Exports.codebookMarkdown(Survey.CODEBOOK, "Codebook");
     assertTrue(
         md.contains(
