@@ -5,19 +5,16 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import java.io.File;
 import java.io.IOException;
 import java.net.http.HttpRequest;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Duration;
-import java.util.Comparator;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.OptionalLong;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
@@ -31,8 +28,6 @@ import org.openqa.selenium.OutputType;
 import org.openqa.selenium.TakesScreenshot;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
-import org.openqa.selenium.chrome.ChromeDriverService;
-import org.openqa.selenium.chrome.ChromeOptions;
 import org.openqa.selenium.support.ui.WebDriverWait;
 import riffle.app.AnswerPage;
 import riffle.app.AnswerQuery;
@@ -79,41 +74,16 @@ class BoardBrowserTest {
       p.quotes().pin("setup", QuoteSlot.PROOF, hostile, WebServerTest.HOSTILE, "fast delivery");
     }
     server = WebServer.start(project, WebServer.Options.defaults().webDir(Path.of("web")));
-    profile = Files.createTempDirectory("riffle-chromium-");
-    ChromeOptions options = new ChromeOptions();
-    options.setBinary("/usr/bin/chromium");
-    options.addArguments(
-        "--headless=new",
-        "--no-sandbox",
-        "--disable-dev-shm-usage",
-        "--disable-gpu",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--disable-sync",
-        "--no-first-run",
-        "--window-size=1280,1100",
-        "--user-data-dir=" + profile);
-    ChromeDriverService service =
-        new ChromeDriverService.Builder()
-            .usingDriverExecutable(new File("/usr/bin/chromedriver"))
-            .usingAnyFreePort()
-            .build();
-    driver = new ChromeDriver(service, options);
+    profile = Chromium.profile();
+    driver = Chromium.start(profile, "1280,1100");
     Files.createDirectories(SHOTS);
   }
 
   @AfterAll
   static void stop() throws IOException {
-    if (driver != null) {
-      driver.quit();
-    }
+    Chromium.stop(driver, profile);
     if (server != null) {
       server.close();
-    }
-    if (profile != null) {
-      try (Stream<Path> files = Files.walk(profile)) {
-        files.sorted(Comparator.reverseOrder()).map(Path::toFile).forEach(File::delete);
-      }
     }
   }
 

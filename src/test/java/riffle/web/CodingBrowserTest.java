@@ -5,17 +5,14 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.File;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Duration;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import java.util.OptionalLong;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
@@ -29,8 +26,6 @@ import org.openqa.selenium.OutputType;
 import org.openqa.selenium.TakesScreenshot;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.chrome.ChromeDriver;
-import org.openqa.selenium.chrome.ChromeDriverService;
-import org.openqa.selenium.chrome.ChromeOptions;
 import org.openqa.selenium.interactions.Actions;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
@@ -96,41 +91,16 @@ class CodingBrowserTest {
       p.coding().applyRules("setup", OptionalLong.of(warranty.id()));
     }
     server = WebServer.start(project, WebServer.Options.defaults().webDir(Path.of("web")));
-    profile = Files.createTempDirectory("riffle-chromium-");
-    ChromeOptions options = new ChromeOptions();
-    options.setBinary("/usr/bin/chromium");
-    options.addArguments(
-        "--headless=new",
-        "--no-sandbox",
-        "--disable-dev-shm-usage",
-        "--disable-gpu",
-        "--disable-background-networking",
-        "--disable-component-update",
-        "--disable-sync",
-        "--no-first-run",
-        "--window-size=1280,1100",
-        "--user-data-dir=" + profile);
-    ChromeDriverService service =
-        new ChromeDriverService.Builder()
-            .usingDriverExecutable(new File("/usr/bin/chromedriver"))
-            .usingAnyFreePort()
-            .build();
-    driver = new ChromeDriver(service, options);
+    profile = Chromium.profile();
+    driver = Chromium.start(profile, "1280,1100");
     Files.createDirectories(SHOTS);
   }
 
   @AfterAll
   static void stop() throws IOException {
-    if (driver != null) {
-      driver.quit();
-    }
+    Chromium.stop(driver, profile);
     if (server != null) {
       server.close();
-    }
-    if (profile != null) {
-      try (Stream<Path> files = Files.walk(profile)) {
-        files.sorted(Comparator.reverseOrder()).map(Path::toFile).forEach(File::delete);
-      }
     }
   }
 

@@ -1,0 +1,59 @@
+package riffle.web;
+
+import java.io.File;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.stream.Stream;
+import org.openqa.selenium.chrome.ChromeDriver;
+import org.openqa.selenium.chrome.ChromeDriverService;
+import org.openqa.selenium.chrome.ChromeOptions;
+
+/**
+ * Debian's Chromium, headless, with its own fresh profile, for the browser tests (the settings in
+ * STACK.md: no downloads, no background networking).
+ */
+final class Chromium {
+  private Chromium() {}
+
+  /** A fresh profile folder for one browser. */
+  static Path profile() throws IOException {
+    return Files.createTempDirectory("riffle-chromium-");
+  }
+
+  /** Starts the browser with a window of {@code size} ("WIDTH,HEIGHT"). */
+  static ChromeDriver start(Path profile, String size) {
+    ChromeOptions options = new ChromeOptions();
+    options.setBinary("/usr/bin/chromium");
+    options.addArguments(
+        "--headless=new",
+        "--no-sandbox",
+        "--disable-dev-shm-usage",
+        "--disable-gpu",
+        "--disable-background-networking",
+        "--disable-component-update",
+        "--disable-sync",
+        "--no-first-run",
+        "--window-size=" + size,
+        "--user-data-dir=" + profile);
+    ChromeDriverService service =
+        new ChromeDriverService.Builder()
+            .usingDriverExecutable(new File("/usr/bin/chromedriver"))
+            .usingAnyFreePort()
+            .build();
+    return new ChromeDriver(service, options);
+  }
+
+  /** Quits the browser (when started) and deletes its profile (when made). */
+  static void stop(org.openqa.selenium.WebDriver driver, Path profile) throws IOException {
+    if (driver != null) {
+      driver.quit();
+    }
+    if (profile != null) {
+      try (Stream<Path> files = Files.walk(profile)) {
+        files.sorted(Comparator.reverseOrder()).map(Path::toFile).forEach(File::delete);
+      }
+    }
+  }
+}
