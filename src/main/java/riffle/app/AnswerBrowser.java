@@ -97,7 +97,7 @@ public final class AnswerBrowser {
     List<String> parts = new ArrayList<>();
     if (query.wave().isPresent()) {
       String wave = query.wave().get();
-      boolean known = store.summary().waves().stream().anyMatch(w -> w.name().equals(wave));
+      boolean known = store.waveNames().contains(wave);
       if (!known) {
         throw new IllegalArgumentException("there is no wave \"" + wave + "\" in this project");
       }

@@ -167,9 +167,7 @@ public final class Project implements AutoCloseable {
   public SuggestionReport suggest(Optional<String> wave) throws InputException {
     List<String> waves = new java.util.ArrayList<>();
     if (wave.isPresent()) {
-      List<String> all = new java.util.ArrayList<>();
-      store.summary().waves().forEach(w -> all.add(w.name()));
-      waves.add(PhraseMining.known(wave.get(), all, "--wave"));
+      waves.add(PhraseMining.known(wave.get(), store.waveNames(), "--wave"));
     }
     Suggestions.Trained trained =
         Suggestions.train(store, riffle.coding.SuggestSettings.defaults());

@@ -13,7 +13,6 @@ import riffle.model.Assignment;
 import riffle.model.Code;
 import riffle.model.Findings;
 import riffle.model.InputException;
-import riffle.model.WaveSummary;
 import riffle.report.CodedExport;
 import riffle.report.ExportAnswer;
 import riffle.report.ExportAssignment;
@@ -44,10 +43,7 @@ public final class Reporting {
   private Loaded load(Optional<String> question) throws InputException {
     List<String> questions = store.questions();
     Optional<String> only = question.map(q -> PhraseMining.question(q, questions));
-    List<String> waves = new ArrayList<>();
-    for (WaveSummary w : store.summary().waves()) {
-      waves.add(w.name());
-    }
+    List<String> waves = store.waveNames();
     List<ProjectStore.AnswerRow> rows = store.answerRows(List.of(), only);
     List<Long> ids = new ArrayList<>(rows.size());
     rows.forEach(r -> ids.add(r.id()));
