@@ -7,6 +7,9 @@
  *       hybrid-score interval} for a difference of two independent proportions, as {@link
  *       riffle.stats.Interval}s; {@link riffle.stats.Normal} gives the critical value for any
  *       confidence level (Wichura's AS 241 quantile).
+ *   <li>Shares read from a random sample of a finite wave: {@link riffle.stats.FinitePopulation}
+ *       (Wilson's interval with the finite-population correction, the exact hypergeometric
+ *       interval, and the {@link riffle.stats.Projection projected count} with its interval).
  *   <li>Tests for 2×2 and r×c tables: {@link riffle.stats.FisherExact} (one- and two-sided, exact
  *       for any n through log-factorials), {@link riffle.stats.PearsonChiSquare} (with and without
  *       Yates, expected counts and Cochran's rule), Dunning's {@link riffle.stats.LogLikelihood
