@@ -12,30 +12,50 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * The forward migrations of the project schema. Migration {@code n} takes a project from schema
- * {@code n-1} to {@code n}; its SQL lives in {@code V<n>__<name>.sql} beside this class.
+ * The forward migrations of the project schema. Migration {@code n} takes a project to schema
+ * {@code n}; its SQL lives in {@code V<n>__<name>.sql} beside this class, and the number in the
+ * name is the version it writes.
  */
 final class Migrations {
-  /** Resource names, in order; the list's size is the newest schema this program knows. */
+  /** Resource names, in order of their versions; the last one's is the newest schema known. */
   private static final List<String> SCRIPTS =
-      List.of("V1__project.sql", "V2__analysis.sql", "V3__coding.sql", "V4__board.sql");
+      List.of(
+          "V1__project.sql",
+          "V2__analysis.sql",
+          "V3__coding.sql",
+          "V4__board.sql",
+          "V6__queue.sql");
 
   private Migrations() {}
 
   static int latest() {
-    return SCRIPTS.size();
+    return version(SCRIPTS.get(SCRIPTS.size() - 1));
+  }
+
+  /** The schema version a script writes: the number after its {@code V}. */
+  static int version(String script) {
+    return Integer.parseInt(script.substring(1, script.indexOf("__")));
   }
 
   /** Applies every migration after {@code from}, inside the caller's transaction. */
   static void apply(Connection connection, int from) throws SQLException {
-    for (int version = from + 1; version <= SCRIPTS.size(); version++) {
+    for (String script : SCRIPTS) {
+      int version = version(script);
+      if (version <= from) {
+        continue;
+      }
       try (Statement statement = connection.createStatement()) {
-        for (String sql : statements(read(SCRIPTS.get(version - 1)))) {
+        for (String sql : statements(read(script))) {
           statement.executeUpdate(sql);
         }
         statement.executeUpdate("PRAGMA user_version = " + version);
       }
     }
+  }
+
+  /** The scripts' names, in order (for tests). */
+  static List<String> scripts() {
+    return SCRIPTS;
   }
 
   /** Splits a script into statements, dropping {@code --} comments first. */

@@ -28,6 +28,7 @@ import riffle.model.HistoryEntry;
 import riffle.model.PiiMask;
 import riffle.model.Progress;
 import riffle.model.ProjectSummary;
+import riffle.model.ReviewQueue;
 import riffle.model.Rule;
 import riffle.model.WaveBatch;
 
@@ -506,6 +507,62 @@ public final class ProjectStore implements AutoCloseable {
                     + " UNION SELECT a.answer_id FROM assignment a WHERE a.code_id IN (SELECT"
                     + " json_extract(row_key, '$.id') FROM edit_step WHERE edit_id > ?1 AND tbl = 'code')",
                 editId));
+  }
+
+  // ---- review queues ----
+
+  /**
+   * A review queue and whether this call started it.
+   *
+   * @param queue the queue
+   * @param created false when it had been started before (its seed and starter are kept)
+   */
+  public record QueueStart(ReviewQueue queue, boolean created) {}
+
+  /**
+   * Starts the review queue of a wave and question (and segment; '' and '' for none) with {@code
+   * seed}, or returns the one already started for them, in one write transaction with an audit row.
+   *
+   * @throws IllegalArgumentException when the wave or question does not exist
+   */
+  public QueueStart startQueue(
+      String wave, String question, String column, String value, long seed, String coder)
+      throws ProjectFileException {
+    return write(c -> QueueRows.start(c, wave, question, column, value, seed, coder));
+  }
+
+  /** The review queue of a wave and question (and segment; '' and '' for none), when started. */
+  public Optional<ReviewQueue> queue(String wave, String question, String column, String value)
+      throws ProjectFileException {
+    return read(c -> QueueRows.find(c, wave, question, column, value));
+  }
+
+  /** Every review queue, by wave, question and segment. */
+  public List<ReviewQueue> queues() throws ProjectFileException {
+    return read(QueueRows::all);
+  }
+
+  /**
+   * The answers a review queue orders: the substantive answers of the wave and question, of
+   * respondents with the segment value when a column is given ('' for none), by id.
+   */
+  public List<Long> queueAnswers(String wave, String question, String column, String value)
+      throws ProjectFileException {
+    return read(c -> QueueRows.answers(c, wave, question, column, value));
+  }
+
+  /**
+   * The answers of a wave and question that a person has read — for now: an assignment made by
+   * hand, imported or accepted from a suggestion, or a code taken off by a person (rule assignments
+   * do not count). The one source of "read" for review queues.
+   */
+  public Set<Long> readAnswers(String wave, String question) throws ProjectFileException {
+    return read(c -> QueueRows.read(c, wave, question));
+  }
+
+  /** The segment columns of a wave's respondents. */
+  public List<String> segmentColumns(String wave) throws ProjectFileException {
+    return read(c -> QueueRows.segmentColumns(c, wave));
   }
 
   /** Work done on a connection. */
