@@ -203,6 +203,11 @@ public final class Project implements AutoCloseable {
     return new Coding(store, this);
   }
 
+  /** Random review queues, and whether the answers read are a random sample. */
+  public ReviewQueues queues() {
+    return new ReviewQueues(store);
+  }
+
   /** Pages through the answers for coding. */
   public AnswerBrowser answers() {
     return new AnswerBrowser(store, this);
