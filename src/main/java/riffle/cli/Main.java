@@ -27,6 +27,7 @@ import picocli.CommandLine.Spec;
       UndoCommand.class,
       RedoCommand.class,
       RulesCommand.class,
+      QueueCommand.class,
       HistoryCommand.class,
       SuggestCommand.class,
       ReportCommand.class,
