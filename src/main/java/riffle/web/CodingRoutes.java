@@ -41,6 +41,7 @@ final class CodingRoutes {
   }
 
   void register(JavalinConfig cfg) {
+    new QueueRoutes(access).register(cfg);
     cfg.routes.get("/api/codes", this::codes);
     cfg.routes.post("/api/codes", this::createCode);
     cfg.routes.patch("/api/codes/{id}", this::changeCode);
