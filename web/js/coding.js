@@ -5,6 +5,7 @@
 import { api, query } from './api.js';
 import { h, fill, count, plural, position } from './dom.js';
 import { coderBar, current as coderName, onCoder } from './coder.js';
+import { orderChoice } from './queue.js';
 
 const PAGE = 50;
 const RESERVED = new Set(['j', 'k', 'z']);
@@ -54,15 +55,17 @@ export function mount(section, context) {
   els.viewFocus = h('button', { type: 'button', class: 'quiet', id: 'coding-view-focus', 'aria-pressed': 'true', on: { click: () => setView('focus') } }, 'One at a time');
   els.viewList = h('button', { type: 'button', class: 'quiet', id: 'coding-view-list', 'aria-pressed': 'false', on: { click: () => setView('list') } }, 'List');
   els.bulk = bulkPanel();
+  els.order = orderChoice(() => load(null, 0).then(focusWork));
 
   const filters = h(
     'form',
-    { class: 'filters', id: 'coding-filters', on: { submit: (e) => { e.preventDefault(); load(0, 0).then(focusWork); } } },
+    { class: 'filters', id: 'coding-filters', on: { submit: (e) => { e.preventDefault(); load(null, 0).then(focusWork); } } },
     field('coding-wave', 'Wave', els.wave),
     field('coding-question', 'Question', els.question),
     field('coding-state', 'Show', els.state),
     field('coding-code', 'With code', els.code),
     field('coding-segment', 'Segment', els.segment),
+    els.order.field,
     h('div', { class: 'field grow' }, h('label', { for: 'coding-query' }, 'Search ', h('kbd', {}, '/')), els.query),
     h('div', { class: 'field end' }, h('button', { type: 'submit', class: 'primary', id: 'coding-go' }, 'Show answers')),
   );
@@ -72,7 +75,7 @@ export function mount(section, context) {
     coderBar('coding'),
     filters,
     els.filterError,
-    h('div', { class: 'coding-head' }, h('div', { class: 'coding-count' }, els.progress, els.bar), h('div', { class: 'coding-views', role: 'group', 'aria-label': 'Show answers' }, els.viewFocus, els.viewList)),
+    h('div', { class: 'coding-head' }, h('div', { class: 'coding-count' }, els.progress, els.bar, els.order.status), h('div', { class: 'coding-views', role: 'group', 'aria-label': 'Show answers' }, els.viewFocus, els.viewList)),
     h('div', { class: 'coding-layout' }, h('div', {}, els.work, els.saving), h('aside', { class: 'coding-side', 'aria-label': 'Codes and keys' }, els.keys, keyHelp(), els.bulk.panel)),
   );
   document.addEventListener('keydown', onKey);
@@ -183,7 +186,8 @@ async function load(offset, index) {
   els.query.removeAttribute('aria-invalid');
   if (!page) fill(els.work, h('p', { class: 'status' }, 'Reading the answers\u2026'));
   try {
-    const next = await api(`/api/answers${query({ ...filterParams(), offset, limit: PAGE })}`);
+    // offset null: the start (in a random order, its first unread answer).
+    const next = els.order.on() ? await els.order.page(filterParams(), offset, PAGE) : await api(`/api/answers${query({ ...filterParams(), offset, limit: PAGE })}`);
     if (mine !== asked) return; // a newer request is on its way
     page = next;
     baseCoded = new Map(page.answers.map((a) => [a.id, a.assignments.length > 0]));
@@ -218,7 +222,7 @@ function showFilterError(what, e) {
 /** Answers on this page that no longer match the coded/uncoded filter (they left the list). */
 function leftFilter() {
   const want = els.state.value;
-  if (!want || !page) return 0;
+  if (!want || !page || page.queue) return 0; // a random order keeps its answers in place
   return page.answers.filter((a) => (shownCodes(a).size > 0) !== (want === 'yes')).length;
 }
 
@@ -476,6 +480,7 @@ function afterQuiet() {
   quietTimer = setTimeout(() => {
     if (queue.length === 0) {
       fetchSuggestions();
+      els.order.refresh();
       ctx.refresh();
     }
   }, 800);
