@@ -5,7 +5,7 @@ import java.util.OptionalDouble;
 
 /**
  * A code's share in a simple random sample of a wave's answers and the count it projects for the
- * whole wave ("about 1,140 of 5,000, 95% interval 1,040–1,250").
+ * whole wave (228 of 1,000 read: "about 1,140 of 5,000, 95% interval 1,028–1,260").
  *
  * @param population N, the answers of the wave (or segment) sampled from
  * @param sample n, the answers read at random, 1 ≤ n ≤ N

@@ -121,6 +121,15 @@ class FinitePopulationTest {
   }
 
   @Test
+  void theReadmesExampleProjectsAboutElevenHundredAndForty() {
+    Projection p = FinitePopulation.project(228, 1_000, 5_000).orElseThrow();
+    assertEquals(1_140, p.projected(), 1e-9);
+    assertEquals(1_028, p.lower());
+    assertEquals(1_260, p.upper());
+    assertFalse(p.census());
+  }
+
+  @Test
   void nothingReadGivesNoEstimate() {
     assertTrue(FinitePopulation.project(0, 0, 500).isEmpty());
     assertThrows(IllegalArgumentException.class, () -> FinitePopulation.wilson(0, 0, 500, 0.95));
