@@ -28,7 +28,8 @@
  *
  * <p>Every class is final with static methods only (results are records), keeps no state and is
  * safe to call from any thread. Each method's Javadoc names the published source of its formula;
- * the tests check them against the worked examples in {@code shared/CHECKS.md} and, where it has
- * the same quantity, against commons-math3 on seeded random inputs.
+ * the tests check them against the worked examples in {@code
+ * src/test/resources/riffle/stats/checks.md} and, where it has the same quantity, against
+ * commons-math3 on seeded random inputs.
  */
 package riffle.stats;

@@ -12,7 +12,8 @@ class CValueTest {
 
   /**
    * Frantzi, Ananiadou &amp; Mima (2000), International Journal on Digital Libraries 3(2):115–130,
-   * §2.3.1, as listed in shared/CHECKS.md: six candidates around "basal cell carcinoma".
+   * §2.3.1, as listed in src/test/resources/riffle/stats/checks.md: six candidates around "basal
+   * cell carcinoma".
    */
   @Test
   void reproducesThePapersWorkedExample() {

@@ -23,7 +23,8 @@ class BenjaminiHochbergTest {
   }
 
   @Test
-  @DisplayName("Adjusted p-values of the 1995 example (library values in shared/CHECKS.md)")
+  @DisplayName(
+      "Adjusted p-values of the 1995 example (library values in src/test/resources/riffle/stats/checks.md)")
   void adjustedValuesOfTheWorkedExample() {
     double[] expected = {
       0.0015, 0.003, 0.0095, 0.035625, 0.0603, 0.063857, 0.063857, 0.0645, 0.0765, 0.486, 0.581182,

@@ -10,9 +10,9 @@ import org.junit.jupiter.api.Test;
 class ChiSquareTest {
 
   /**
-   * The critical values of shared/CHECKS.md (keyness section): 3.84, 6.63, 10.83 and 15.13 are the
-   * rounded quantiles for p = .05, .01, .001 and .0001, so the tail at each is within a few tenths
-   * of a percent of its level.
+   * The critical values of src/test/resources/riffle/stats/checks.md (keyness section): 3.84, 6.63,
+   * 10.83 and 15.13 are the rounded quantiles for p = .05, .01, .001 and .0001, so the tail at each
+   * is within a few tenths of a percent of its level.
    */
   @Test
   void criticalValuesGiveTheirSignificanceLevels() {
@@ -25,7 +25,10 @@ class ChiSquareTest {
     assertTrue(ChiSquare.upperTailDf1(3.83) > 0.05);
   }
 
-  /** shared/CHECKS.md, Fisher section: Pearson χ² = 2.0 for the tea table has p = 0.157299. */
+  /**
+   * src/test/resources/riffle/stats/checks.md, Fisher section: Pearson χ² = 2.0 for the tea table
+   * has p = 0.157299.
+   */
   @Test
   void pearsonStatisticOfTheTeaTableHasItsLibraryPValue() {
     assertEquals(0.157299, ChiSquare.upperTailDf1(2.0), 5e-7);

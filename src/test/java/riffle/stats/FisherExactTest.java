@@ -21,7 +21,8 @@ class FisherExactTest {
   }
 
   @Test
-  @DisplayName("Convictions of twins: R fisher.test documentation, values from shared/CHECKS.md")
+  @DisplayName(
+      "Convictions of twins: R fisher.test documentation, values from src/test/resources/riffle/stats/checks.md")
   void convictionsOfTwins() {
     assertEquals(0.000465181, FisherExact.less(2, 10, 15, 3), 5e-10);
     assertEquals(0.000536724, FisherExact.twoSided(2, 10, 15, 3), 5e-10);

@@ -9,8 +9,9 @@ import org.junit.jupiter.api.Test;
 class KeynessTest {
 
   /**
-   * shared/CHECKS.md, "Keyness between two waves": Rayson &amp; Garside (2000) log-likelihood
-   * (two-term form of the UCREL calculator) and Hardie (2014) Log Ratio, library values.
+   * src/test/resources/riffle/stats/checks.md, "Keyness between two waves": Rayson &amp; Garside
+   * (2000) log-likelihood (two-term form of the UCREL calculator) and Hardie (2014) Log Ratio,
+   * library values.
    */
   @Test
   void reproducesTheWorkedKeynessExamples() {

@@ -12,7 +12,8 @@ class LogLikelihoodTest {
 
   /**
    * Dunning (1993), Computational Linguistics 19(1):61–74, table of bigrams from a 31,777-word
-   * text; values as listed in shared/CHECKS.md (two decimals, as published).
+   * text; values as listed in src/test/resources/riffle/stats/checks.md (two decimals, as
+   * published).
    */
   @Test
   void reproducesDunningsBigramTable() {

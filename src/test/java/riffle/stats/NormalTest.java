@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 
 class NormalTest {
 
-  /** shared/CHECKS.md gives z = 1.959963984540054 for 95%. */
+  /** src/test/resources/riffle/stats/checks.md gives z = 1.959963984540054 for 95%. */
   @Test
   void ninetyFivePercentCriticalValueIsTheCheckedOne() {
     assertEquals(1.959963984540054, Normal.quantile(0.975), 1e-15);

@@ -15,7 +15,8 @@ import org.junit.jupiter.api.Test;
 class PearsonChiSquareTest {
 
   @Test
-  @DisplayName("Tea table: χ² 2.0 (p 0.157299), Yates 0.5 (p 0.479500) — shared/CHECKS.md, library")
+  @DisplayName(
+      "Tea table: χ² 2.0 (p 0.157299), Yates 0.5 (p 0.479500) — src/test/resources/riffle/stats/checks.md, library")
   void teaTable() {
     PearsonChiSquare.Result plain = PearsonChiSquare.test(3, 1, 1, 3);
     assertEquals(2.0, plain.statistic(), 1e-12);
@@ -27,7 +28,10 @@ class PearsonChiSquareTest {
     assertArrayEquals(new double[] {2, 2}, plain.expected()[0], 1e-12);
   }
 
-  /** Cochran (1954) as quoted in shared/CHECKS.md "Small bases": the tea table fails it. */
+  /**
+   * Cochran (1954) as quoted in src/test/resources/riffle/stats/checks.md "Small bases": the tea
+   * table fails it.
+   */
   @Test
   void cochransRuleNeedsExpectedCountsOfFive() {
     assertFalse(PearsonChiSquare.test(3, 1, 1, 3).cochranAdequate());
