@@ -18,7 +18,12 @@ import java.util.Objects;
 final class Migrations {
   /** Resource names, in order; the list's size is the newest schema this program knows. */
   private static final List<String> SCRIPTS =
-      List.of("V1__project.sql", "V2__analysis.sql", "V3__coding.sql", "V4__board.sql");
+      List.of(
+          "V1__project.sql",
+          "V2__analysis.sql",
+          "V3__coding.sql",
+          "V4__board.sql",
+          "V5__review.sql");
 
   private Migrations() {}
 

@@ -118,12 +118,13 @@ class CodingCommandsTest {
             .json();
     assertEquals(2, preview.get("would_code").asInt(), preview.toString());
     ok("rules", "add", "--project", project, "Price", "--query", "price OR steep");
-    ok("rules", "apply", "--project", project);
+    String applied = ok("rules", "apply", "--project", project).out();
+    assertTrue(applied.contains("2 answer(s) coded, 2 code(s) given"), applied);
     assertEquals(2, codeNamed("Price").get("answers").asInt());
     long steep = firstAnswer("steep");
     ok("code", "--project", project, "--answer", Long.toString(steep), "--remove", "Price");
     String again = ok("rules", "apply", "--project", project).out();
-    assertTrue(again.contains("0 answer(s) coded, 1 left alone"), again);
+    assertTrue(again.contains("0 answer(s) coded, 0 code(s) given; 1 left alone"), again);
     assertEquals(1, codeNamed("Price").get("answers").asInt());
   }
 

@@ -370,7 +370,10 @@ class CodingApiTest {
     post("/api/assignments", assign(answer, code));
     JsonNode findings = get("/api/findings").json();
     JsonNode q = findings.get("questions").get(0);
-    assertEquals(11, q.get("bases").get("Wave 1").asInt());
+    // The base is the answers a person read: one of the wave's 11.
+    assertEquals(1, q.get("bases").get("Wave 1").asInt());
+    assertEquals(11, q.get("coverage").get("Wave 1").get("answers").asInt());
+    assertEquals(1, q.get("coverage").get("Wave 1").get("read").asInt());
     assertNotNull(q.get("saturation").get("chao1"));
     boolean found = false;
     for (JsonNode c : q.get("codes")) {
@@ -378,7 +381,7 @@ class CodingApiTest {
         found = true;
         JsonNode share = c.get("waves").get("Wave 1");
         assertEquals(1, share.get("count").asInt());
-        assertTrue(share.get("small_base").asBoolean(), "11 answers is a small base");
+        assertTrue(share.get("small_base").asBoolean(), "1 answer read is a small base");
       }
     }
     assertTrue(found);
