@@ -82,15 +82,17 @@ public final class Reporting {
     List<ReportAnswer> answers = new ArrayList<>(l.rows.size());
     for (ProjectStore.AnswerRow r : l.rows) {
       List<Assignment> as = l.assignments.getOrDefault(r.id(), List.of());
+      AnswerRead read = l.reads.get(r.id());
       Set<String> codes = new HashSet<>();
       Set<String> byRule = new HashSet<>();
       for (Assignment a : as) {
         codes.add(Long.toString(a.codeId()));
-        if (a.origin() == Origin.RULE) {
+        // A rule's code counts as a person's when it was on the answer while they read it; one a
+        // rule gave later, or to an answer nobody read, is the rule's alone.
+        if (a.origin() == Origin.RULE && (read == null || a.at().isAfter(read.last()))) {
           byRule.add(Long.toString(a.codeId()));
         }
       }
-      AnswerRead read = l.reads.get(r.id());
       answers.add(
           new ReportAnswer(
               Long.toString(r.id()),

@@ -13,14 +13,18 @@ import java.util.Objects;
  * @param answerId the answer
  * @param readers who read it, in the order of their first mark
  * @param first when it was first read (the earliest of its marks still in the project)
+ * @param last its latest mark: a code a rule gave before then was on the answer while a person read
+ *     it
  * @param marked whether it carries the "read, no code applies" mark (of a person, or of an import
  *     coded elsewhere that gave it no code)
  */
-public record AnswerRead(long answerId, List<String> readers, Instant first, boolean marked) {
+public record AnswerRead(
+    long answerId, List<String> readers, Instant first, Instant last, boolean marked) {
   /** Checks the components and copies the list. */
   public AnswerRead {
     readers = List.copyOf(readers);
     Objects.requireNonNull(first, "first");
+    Objects.requireNonNull(last, "last");
     if (readers.isEmpty()) {
       throw new IllegalArgumentException("a read answer has a reader");
     }

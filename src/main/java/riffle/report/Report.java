@@ -488,7 +488,8 @@ public final class Report {
       List<SaturationPoint> curve = new ArrayList<>();
       for (int k = 0; k < read.size(); k++) {
         Arrays.fill(bits, 0);
-        codebook.mark(read.get(k), bits, false);
+        ReportAnswer a = read.get(k);
+        codebook.mark(a.id(), a.codes(), a.byRule(), bits, false);
         boolean grew = false;
         for (int w = 0; w < bits.length; w++) {
           for (long word = bits[w]; word != 0; word &= word - 1) {
@@ -686,36 +687,30 @@ public final class Report {
         return;
       }
       answers[wave]++;
-      if (a.personCoded()) {
-        long[] person = bits;
-        if (!a.byRule().isEmpty()) {
-          Arrays.fill(personBits, 0);
-          codebook.mark(a.id(), a.codes(), a.byRule(), personBits, true);
-          person = personBits;
-        }
-        for (int w = 0; w < person.length; w++) {
-          for (long word = person[w]; word != 0; word &= word - 1) {
-            human[w * 64 + Long.numberOfTrailingZeros(word)] = true;
-          }
+      int[] carried = all[wave];
+      for (int w = 0; w < bits.length; w++) {
+        for (long word = bits[w]; word != 0; word &= word - 1) {
+          carried[w * 64 + Long.numberOfTrailingZeros(word)]++;
         }
       }
-      int[] carried = all[wave];
+      // What a person gave (or saw): every code but those only a rule gave.
+      long[] person = bits;
+      if (!a.byRule().isEmpty()) {
+        Arrays.fill(personBits, 0);
+        codebook.mark(a.id(), a.codes(), a.byRule(), personBits, true);
+        person = personBits;
+      }
       if (!a.read()) {
-        for (int w = 0; w < bits.length; w++) {
-          for (long word = bits[w]; word != 0; word &= word - 1) {
-            carried[w * 64 + Long.numberOfTrailingZeros(word)]++;
-          }
-        }
-        return;
+        return; // an unread answer carries no code a person gave (ReportAnswer checks it)
       }
       read[wave]++;
       pooledRead++;
       int k = 0;
       int[] counted = count[wave];
-      for (int w = 0; w < bits.length; w++) {
-        for (long word = bits[w]; word != 0; word &= word - 1) {
+      for (int w = 0; w < person.length; w++) {
+        for (long word = person[w]; word != 0; word &= word - 1) {
           int i = w * 64 + Long.numberOfTrailingZeros(word);
-          carried[i]++;
+          human[i] = true;
           counted[i]++;
           pooled[i]++;
           present[k++] = i;

@@ -22,7 +22,9 @@ import java.util.TreeMap;
  * @param read whether a person has read it (coded it, marked it as read with no code applying, or
  *     coded it elsewhere before the import): only read answers are in the base of a code given by
  *     hand
- * @param byRule the ids among {@code codes} that a rule gave and no person confirmed
+ * @param byRule the ids among {@code codes} that a rule gave and no person has seen (the answer is
+ *     unread, or the rule gave them after its last reading): they count in shares by rule only,
+ *     never among the read answers
  */
 public record ReportAnswer(
     String id,
@@ -75,10 +77,5 @@ public record ReportAnswer(
         firstCoded,
         !codes.isEmpty() || firstCoded.isPresent(),
         Set.of());
-  }
-
-  /** Whether it carries a code given by a person (any of {@code codes} not given by rule). */
-  boolean personCoded() {
-    return codes.size() > byRule.size();
   }
 }

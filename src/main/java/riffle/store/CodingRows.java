@@ -217,15 +217,20 @@ final class CodingRows {
     for (Map.Entry<Long, List<Object[]>> e : rows.entrySet()) {
       Map<String, Instant> firstBy = new HashMap<>();
       boolean marked = false;
+      Instant last = Instant.MIN;
       for (Object[] r : e.getValue()) {
-        firstBy.merge((String) r[0], (Instant) r[1], (x, y) -> x.isBefore(y) ? x : y);
+        Instant at = (Instant) r[1];
+        firstBy.merge((String) r[0], at, (x, y) -> x.isBefore(y) ? x : y);
         marked |= (Integer) r[2] == 1;
+        last = at.isAfter(last) ? at : last;
       }
       List<String> readers = new ArrayList<>(firstBy.keySet());
       readers.sort(
           java.util.Comparator.comparing((String who) -> firstBy.get(who))
               .thenComparing(who -> who));
-      out.put(e.getKey(), new AnswerRead(e.getKey(), readers, firstBy.get(readers.get(0)), marked));
+      out.put(
+          e.getKey(),
+          new AnswerRead(e.getKey(), readers, firstBy.get(readers.get(0)), last, marked));
     }
     return out;
   }
