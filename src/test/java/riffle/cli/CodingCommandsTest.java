@@ -128,6 +128,35 @@ class CodingCommandsTest {
     assertEquals(1, codeNamed("Price").get("answers").asInt());
   }
 
+  int readInQuestionTwo() throws Exception {
+    return ok("report", "--project", project, "--question", "2", "--json")
+        .json()
+        .get("questions")
+        .get(0)
+        .get("coverage")
+        .get("Wave 1")
+        .get("read")
+        .asInt();
+  }
+
+  @Test
+  void anAnswerIsMarkedReadWithNoCodeAndTheMarkIsTakenBack() throws Exception {
+    assertEquals(0, readInQuestionTwo(), "no codes column for this question: nothing read");
+    String answer = Long.toString(firstAnswer("grinders"));
+    String marked =
+        ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana").out();
+    assertTrue(marked.contains("as read: no other code applies"), marked);
+    assertEquals(1, readInQuestionTwo());
+    ok("undo", "--project", project, "--coder", "ana");
+    assertEquals(0, readInQuestionTwo(), "undone");
+    ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana");
+    ok("code", "--project", project, "--answer", answer, "--none-off", "--coder", "eli");
+    assertEquals(0, readInQuestionTwo(), "the mark taken off");
+    CliTest.Run both =
+        CliTest.riffle("code", "--project", project, "--answer", answer, "--none", "--add", "X");
+    assertEquals(2, both.code(), "one change at a time");
+  }
+
   @Test
   void badRequestsExitTwoWithAMessageAndChangeNothing() throws Exception {
     ok("codes", "add", "--project", project, "Price", "--key", "p");
