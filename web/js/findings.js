@@ -173,9 +173,9 @@ function questionFindings(q, index) {
         ],
     notCompared.length
       ? h(
-          'div',
-          { class: 'not-compared', id: `${id}-not-compared` },
-          h('h4', {}, `Not compared (${count(notCompared.length)})`),
+          'details',
+          { class: 'not-compared', id: `${id}-not-compared`, open: notCompared.length <= 6 },
+          h('summary', {}, `Not compared (${count(notCompared.length)}): no share in a wave, or shares counted over different answers`),
           h('ul', { class: 'verdicts' }, notCompared.map((n) => h('li', { class: 'verdict v-not-compared' }, h('span', { class: 'words' }, `\u201c${n.code}\u201d, ${n.from} \u2192 ${n.to}: `), h('span', { class: 'numbers' }, n.reason)))),
         )
       : null,

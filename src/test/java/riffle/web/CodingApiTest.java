@@ -364,6 +364,41 @@ class CodingApiTest {
   }
 
   @Test
+  void anAnswerIsMarkedReadWithNoCodeAndTheProgressCountsSubstantiveAnswersRead() throws Exception {
+    JsonNode all = get("/api/answers?limit=100").json();
+    assertEquals(12, all.get("total").asInt());
+    assertEquals(11, all.get("substantive").asInt(), "the non-answer is apart");
+    JsonNode page = get("/api/answers?q=break").json();
+    JsonNode entry = page.get("answers").get(0);
+    long answer = entry.get("id").asLong();
+    assertFalse(entry.get("read").asBoolean());
+    assertEquals(0, page.get("read").asInt());
+
+    WebServerTest.Answer marked =
+        post("/api/answers/read", Map.of("coder", "ana", "answer", answer));
+    assertEquals(200, marked.status(), marked.raw().body());
+    assertTrue(marked.json().get("read").asBoolean());
+    assertTrue(marked.json().get("marked").asBoolean());
+    assertTrue(marked.json().get("outcome").get("message").asText().contains("as read"));
+    JsonNode after = get("/api/answers?q=break").json();
+    assertEquals(1, after.get("read").asInt());
+    assertTrue(after.get("answers").get(0).get("marked").asBoolean());
+    assertEquals(
+        0, get("/api/answers?coded=no&q=break").json().get("total").asInt(), "read: not to do");
+    JsonNode state = get("/api/assignments?answers=" + answer).json();
+    assertEquals(answer, state.get("read").get(0).asLong());
+    assertEquals(answer, state.get("marked").get(0).asLong());
+
+    WebServerTest.Answer off =
+        post("/api/answers/read/remove", Map.of("coder", "ana", "answer", answer));
+    assertEquals(200, off.status(), off.raw().body());
+    assertFalse(off.json().get("read").asBoolean());
+    assertEquals(0, get("/api/answers?q=break").json().get("read").asInt());
+    assertEquals(400, post("/api/answers/read", Map.of("answer", answer)).status(), "no coder");
+    assertEquals(400, post("/api/answers/read", Map.of("coder", "ana", "answer", 99_999)).status());
+  }
+
+  @Test
   void findingsAndExportsComeFromTheProject() throws Exception {
     long code = code("Returns unclear", null);
     long answer = get("/api/answers?q=returns").json().get("answers").get(0).get("id").asLong();
