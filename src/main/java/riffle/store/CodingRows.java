@@ -177,7 +177,8 @@ final class CodingRows {
    */
   static Map<Long, AnswerRead> reads(Connection c, Collection<Long> ids) throws SQLException {
     String marks =
-        "SELECT answer_id, coder, created_at, 0 AS marked FROM assignment WHERE origin <> 'rule'"
+        "SELECT answer_id, coder, created_at, 0 AS marked FROM assignment"
+            + " WHERE origin IN ('manual', 'imported', 'suggestion')"
             + " UNION ALL SELECT answer_id, coder, created_at, 0 FROM assignment_veto"
             + " UNION ALL SELECT answer_id, coder, created_at, 1 FROM answer_read";
     Map<Long, List<Object[]>> rows = new HashMap<>();
@@ -239,7 +240,7 @@ final class CodingRows {
   static long[] readIds(Connection c) throws SQLException {
     return longs(
         c,
-        "SELECT answer_id FROM assignment WHERE origin <> 'rule'"
+        "SELECT answer_id FROM assignment WHERE origin IN ('manual', 'imported', 'suggestion')"
             + " UNION SELECT answer_id FROM assignment_veto"
             + " UNION SELECT answer_id FROM answer_read ORDER BY 1");
   }

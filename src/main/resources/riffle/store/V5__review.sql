@@ -9,3 +9,6 @@ CREATE TABLE answer_read (
   coder      TEXT    NOT NULL,
   created_at TEXT    NOT NULL
 );
+
+-- Which answers a person read is asked of every coding page (the progress) and every report.
+CREATE INDEX assignment_by_origin ON assignment(origin, answer_id);
