@@ -140,8 +140,14 @@ class HandThenRuleTest {
   @Test
   void htmlAndMarkdownPrintCoverageAndTheReasonsInsteadOfAVerdict() throws Exception {
     try (Project p = Project.openExisting(file)) {
-      Findings f = p.reporting().findings(FindingsQuery.ALL);
+      Findings f =
+          p.reporting()
+              .findings(
+                  new FindingsQuery(
+                      Optional.empty(), Optional.of("device"), Optional.empty(), Optional.empty()));
       for (String doc : List.of(p.reporting().html(f, "t"), p.reporting().markdown(f, "t"))) {
+        assertTrue(doc.contains("device: Mobile"), "the segment split");
+        assertTrue(doc.contains("device: (no value)"));
         assertTrue(doc.contains("Wave 1 read 80 of 80 (100%)"), doc);
         assertTrue(doc.contains("Wave 2 read 0 of 80 (0%)"));
         assertTrue(doc.contains("no answer of Wave 2 read by a person yet"));
