@@ -67,14 +67,14 @@ final class Text {
   }
 
   /** Coverage per wave on one line: "Spring read 112 of 580 (19%) · Summer read 0 of 600 (0%)". */
-  static String coverageLine(QuestionFindings q, String escapedJoin, Escape esc) {
+  static String coverageLine(QuestionFindings q, String join, Escape esc) {
     List<String> parts = new java.util.ArrayList<>();
     int nonAnswers = 0;
     for (var e : q.coverage().entrySet()) {
       parts.add(esc.apply(e.getKey()) + " " + coverage(e.getValue()));
       nonAnswers += e.getValue().nonAnswers();
     }
-    String line = String.join(escapedJoin, parts);
+    String line = String.join(join, parts);
     if (nonAnswers > 0) {
       line +=
           " (" + nonAnswers + " non-answer" + (nonAnswers == 1 ? "" : "s") + " counted nowhere)";
