@@ -693,15 +693,15 @@ public final class Report {
           carried[w * 64 + Long.numberOfTrailingZeros(word)]++;
         }
       }
+      if (!a.read()) {
+        return; // an unread answer carries no code a person gave (ReportAnswer checks it)
+      }
       // What a person gave (or saw): every code but those only a rule gave.
       long[] person = bits;
       if (!a.byRule().isEmpty()) {
         Arrays.fill(personBits, 0);
         codebook.mark(a.id(), a.codes(), a.byRule(), personBits, true);
         person = personBits;
-      }
-      if (!a.read()) {
-        return; // an unread answer carries no code a person gave (ReportAnswer checks it)
       }
       read[wave]++;
       pooledRead++;
