@@ -9,6 +9,9 @@ import { orderChoice } from './queue.js';
 
 const PAGE = 50;
 const RESERVED = new Set(['j', 'k', 'z']);
+// "Read, no code applies": a key no code can have (code keys are letters and digits).
+const READ_KEY = '.';
+const NONE = 'read-mark'; // the guess's code for the read mark
 
 let ctx;
 let els;
@@ -16,7 +19,7 @@ let codes = []; // the codebook, in order
 let byKey = new Map(); // key → code
 let byId = new Map(); // id → code
 let page = null; // {query, total, coded, offset, answers}
-let baseCoded = new Map(); // answer id → whether it was coded when the page came
+let baseRead = new Map(); // answer id → whether it was read when the page came
 let at = 0; // index of the current answer in page.answers
 let view = 'focus';
 let loading = false;
@@ -40,7 +43,7 @@ export function mount(section, context) {
     'select',
     { id: 'coding-state' },
     h('option', { value: '' }, 'All answers'),
-    h('option', { value: 'no' }, 'Not coded yet'),
+    h('option', { value: 'no' }, 'Not read yet'),
     h('option', { value: 'yes' }, 'Coded'),
   );
   els.code = h('select', { id: 'coding-code' });
@@ -108,6 +111,7 @@ function keyHelp() {
         ['j  or  \u2193 \u2192', 'next answer'],
         ['k  or  \u2191 \u2190', 'previous answer'],
         ['Enter', 'accept the top suggestion'],
+        [READ_KEY, 'read: no (other) code applies; again to take the mark off'],
         ['z  /  Shift+z', 'undo / redo your last change'],
         ['/', 'search these answers'],
         ['Esc', 'leave the search, back to the answer'],
@@ -190,8 +194,8 @@ async function load(offset, index) {
     const next = els.order.on() ? await els.order.page(filterParams(), offset, PAGE) : await api(`/api/answers${query({ ...filterParams(), offset, limit: PAGE })}`);
     if (mine !== asked) return; // a newer request is on its way
     page = next;
-    baseCoded = new Map(page.answers.map((a) => [a.id, a.assignments.length > 0]));
     for (const a of page.answers) a.server = a.assignments;
+    baseRead = new Map(page.answers.map((a) => [a.id, readNow(a)]));
     at = Math.max(0, Math.min(index < 0 ? page.answers.length - 1 : index, page.answers.length - 1));
     errors.clear();
     renderAll();
@@ -219,11 +223,12 @@ function showFilterError(what, e) {
   els.filterError.hidden = false;
 }
 
-/** Answers on this page that no longer match the coded/uncoded filter (they left the list). */
+/** Answers on this page that no longer match the read/coded filter (they left the list). */
 function leftFilter() {
   const want = els.state.value;
   if (!want || !page || page.queue) return 0; // a random order keeps its answers in place
-  return page.answers.filter((a) => (shownCodes(a).size > 0) !== (want === 'yes')).length;
+  if (want === 'no') return page.answers.filter((a) => shownCodes(a).size > 0 || readNow(a)).length;
+  return page.answers.filter((a) => shownCodes(a).size === 0).length;
 }
 
 function move(step) {
@@ -259,10 +264,23 @@ function shownCodes(answer) {
 
 function applyGuess(state, op, answerId) {
   for (const g of op.guess || []) {
-    if (g.answer !== answerId) continue;
+    if (g.answer !== answerId || g.code === NONE) continue;
     if (g.after) state.set(g.code, { ...g.after, pending: true });
     else state.delete(g.code);
   }
+}
+
+/** Whether the answer carries the "read, no code applies" mark, queued changes replayed. */
+function shownMarked(answer) {
+  let marked = !!answer.marked;
+  for (const op of queue) for (const g of op.guess || []) if (g.answer === answer.id && g.code === NONE) marked = !!g.after;
+  return marked;
+}
+
+/** Whether a person has read the answer: the server says so, or a change of this page makes it. */
+function readNow(answer) {
+  if (answer.read || shownMarked(answer)) return true;
+  return queue.some((op) => op.answer === answer.id && op.kind !== 'none-off');
 }
 
 // ---- keys ----
@@ -293,6 +311,9 @@ function onKey(e) {
     e.preventDefault();
     if (e.shiftKey || key === 'Z') redo();
     else undo();
+  } else if (key === READ_KEY) {
+    e.preventDefault();
+    toggleRead(currentAnswer());
   } else if (key === 'Enter') {
     const top = topSuggestion(currentAnswer());
     if (top) {
@@ -344,6 +365,15 @@ function toggle(answer, code) {
     enqueue({ kind: 'remove', answer: answer.id, code: code.id, label: `take \u201c${code.name}\u201d off`, guess: [{ answer: answer.id, code: code.id, before: had, after: null }] });
   } else {
     enqueue({ kind: 'assign', answer: answer.id, code: code.id, label: `give \u201c${code.name}\u201d`, guess: [{ answer: answer.id, code: code.id, before: null, after: { span: null, origin: 'manual' } }] });
+  }
+}
+
+function toggleRead(answer) {
+  if (!answer || !requireCoder()) return;
+  if (shownMarked(answer)) {
+    enqueue({ kind: 'none-off', answer: answer.id, label: 'take the read mark off', guess: [{ answer: answer.id, code: NONE, before: true, after: null }] });
+  } else {
+    enqueue({ kind: 'none', answer: answer.id, label: 'mark it as read', guess: [{ answer: answer.id, code: NONE, before: null, after: true }] });
   }
 }
 
@@ -425,6 +455,10 @@ function deliver(op) {
       return api('/api/assignments/remove', { method: 'POST', body: { coder, answer: op.answer, code: op.code } });
     case 'accept':
       return api('/api/assignments/accept', { method: 'POST', body: { coder, answer: op.answer, code: op.code } });
+    case 'none':
+      return api('/api/answers/read', { method: 'POST', body: { coder, answer: op.answer } });
+    case 'none-off':
+      return api('/api/answers/read/remove', { method: 'POST', body: { coder, answer: op.answer } });
     case 'undo':
       return api('/api/undo', { method: 'POST', body: { coder } });
     case 'redo':
@@ -440,6 +474,10 @@ function settle(op, result) {
     for (const g of op.guess || []) {
       const answer = page && page.answers.find((a) => a.id === g.answer);
       if (!answer) continue;
+      if (g.code === NONE) {
+        answer.marked = !!g.after;
+        continue;
+      }
       const rest = answer.server.filter((a) => a.code_id !== g.code);
       if (g.after) rest.push({ answer_id: g.answer, code_id: g.code, span: g.after.span, origin: g.after.origin });
       answer.server = rest;
@@ -451,7 +489,11 @@ function settle(op, result) {
     return;
   }
   const answer = page && page.answers.find((a) => a.id === op.answer);
-  if (answer) answer.server = result.assignments;
+  if (answer) {
+    answer.server = result.assignments;
+    answer.read = result.read;
+    answer.marked = result.marked;
+  }
   if (result.outcome.edit === 0) {
     const i = done.indexOf(op);
     if (i >= 0) done.splice(i, 1);
@@ -490,7 +532,13 @@ async function refreshAssignments() {
   if (!page || page.answers.length === 0) return;
   try {
     const got = await api(`/api/assignments${query({ answers: page.answers.map((a) => a.id).join(',') })}`);
-    for (const a of page.answers) a.server = got.assignments[a.id] || [];
+    const read = new Set(got.read);
+    const marked = new Set(got.marked);
+    for (const a of page.answers) {
+      a.server = got.assignments[a.id] || [];
+      a.read = read.has(a.id);
+      a.marked = marked.has(a.id);
+    }
     renderAll();
   } catch (e) {
     lastMessage = `The codes could not be read again: ${e.message}`;
@@ -600,7 +648,7 @@ function chips(answer, id) {
   for (const c of codes) {
     if (state.has(c.id)) list.append(codeChip(c, state.get(c.id)));
   }
-  if (state.size === 0) list.append(h('li', { class: 'chip none' }, 'no code yet'));
+  if (state.size === 0) list.append(h('li', { class: 'chip none' }, readNow(answer) ? 'read: no code applies' : 'no code yet'));
   return list;
 }
 
@@ -630,7 +678,8 @@ function answerText(answer, id) {
 
 function meta(answer) {
   const seg = Object.entries(answer.segments || {}).map(([k, v]) => `${k} ${v}`);
-  return [answer.wave, `Q${answer.question_number}`, `respondent ${answer.respondent}`, ...seg, answer.substantive ? null : 'non-answer'].filter(Boolean).join(' \u00b7 ');
+  const read = answer.substantive ? (readNow(answer) ? 'read' : 'not read yet') : 'non-answer';
+  return [answer.wave, `Q${answer.question_number}`, `respondent ${answer.respondent}`, ...seg, read].filter(Boolean).join(' \u00b7 ');
 }
 
 function focusCard(answer) {
@@ -724,27 +773,44 @@ function renderKeys() {
             return h('li', {}, b);
           }),
         ),
+    h(
+      'button',
+      {
+        type: 'button',
+        class: `keybtn readbtn${answer && shownMarked(answer) ? ' on' : ''}`,
+        id: 'coding-read-none',
+        'aria-pressed': String(!!answer && shownMarked(answer)),
+        disabled: !answer,
+        on: { click: () => { toggleRead(currentAnswer()); focusWork(); } },
+      },
+      h('kbd', {}, READ_KEY),
+      h('span', {}, 'Read, no code applies'),
+    ),
   );
 }
 
-function codedNow() {
+/** Substantive answers read, the server's count adjusted by this page's changes since. */
+function readCount() {
   if (!page) return 0;
-  let n = page.coded;
+  let n = page.read;
   for (const a of page.answers) {
-    const now = shownCodes(a).size > 0;
-    const was = baseCoded.get(a.id);
+    if (!a.substantive) continue;
+    const now = readNow(a);
+    const was = baseRead.get(a.id);
     if (now && !was) n++;
     if (!now && was) n--;
   }
-  return n;
+  return Math.max(0, Math.min(n, page.substantive));
 }
 
 function renderProgress() {
   if (!page) return;
-  const coded = codedNow();
-  els.progress.textContent = `${count(coded)} of ${plural(page.total, 'answer')} coded${page.total ? ` (${Math.round((100 * coded) / page.total)}%)` : ''}`;
-  els.bar.max = Math.max(1, page.total);
-  els.bar.value = coded;
+  const read = readCount();
+  const apart = page.total - page.substantive;
+  const pct = page.substantive ? ` (${Math.round((100 * read) / page.substantive)}%)` : '';
+  els.progress.textContent = `Read ${count(read)} of ${plural(page.substantive, 'answer')}${pct}${apart ? ` \u00b7 ${plural(apart, 'non-answer')} apart` : ''}`;
+  els.bar.max = Math.max(1, page.substantive);
+  els.bar.value = read;
   renderKeys();
 }
 

@@ -134,9 +134,22 @@ function sentence(c) {
   }
 }
 
+/** "read 112 of 580 (19%)" */
+function coverage(c) {
+  const share = c.read > 0 && c.share < 0.005 ? '<1%' : `${Math.round(c.share * 100)}%`;
+  return `read ${count(c.read)} of ${count(c.answers)} (${share})`;
+}
+
+function coverageLine(q) {
+  const entries = Object.entries(q.coverage || {});
+  const apart = entries.reduce((n, [, c]) => n + c.non_answers, 0);
+  return [entries.map(([w, c]) => `${w} ${coverage(c)}`).join(' \u00b7 '), apart ? ` (${plural(apart, 'non-answer')} counted nowhere)` : ''].join('');
+}
+
 function questionFindings(q, index) {
   const id = `findings-q${index + 1}`;
   const waves = Object.keys(q.bases);
+  const notCompared = q.not_compared || [];
   const changes = [...q.changes].sort((a, b) => ORDER[a.verdict] - ORDER[b.verdict] || a.p_adjusted - b.p_adjusted);
   const clear = changes.filter((c) => c.verdict === 'rose' || c.verdict === 'fell');
   const rest = changes.filter((c) => c.verdict !== 'rose' && c.verdict !== 'fell');
@@ -144,13 +157,13 @@ function questionFindings(q, index) {
     'section',
     { class: 'panel findings', 'aria-labelledby': id },
     h('h2', { id }, q.question),
-    h('p', { class: 'meta' }, 'Base (substantive answers): ', waves.map((w) => `${w} ${count(q.bases[w])}`).join(' \u00b7 ')),
+    h('p', { class: 'meta coverage', id: `${id}-coverage` }, 'Answers read by a person: ', coverageLine(q)),
     q.not_coded && q.not_coded.length > 0
-      ? h('p', { class: 'hint' }, `Not coded yet, so left out: ${q.not_coded.join(', ')}.`)
+      ? h('p', { class: 'hint' }, `No answer read by a person yet in ${q.not_coded.join(', ')}: codes given by hand have no share there.`)
       : null,
     h('h3', {}, 'What changed'),
     changes.length === 0
-      ? h('p', { class: 'hint' }, waves.length < 2 ? 'One wave only: nothing to compare yet.' : 'No codes to compare yet.')
+      ? h('p', { class: 'hint' }, notCompared.length ? 'No comparison can be made yet: see why below.' : waves.length < 2 ? 'One wave only: nothing to compare yet.' : 'No codes to compare yet.')
       : [
           clear.length === 0 ? h('p', { class: 'verdict none' }, 'No code rose or fell clearly.') : null,
           h('ul', { class: 'verdicts', id: `${id}-verdicts` }, clear.map(verdictItem)),
@@ -158,8 +171,16 @@ function questionFindings(q, index) {
             ? h('details', { class: 'verdicts-rest' }, h('summary', {}, `${plural(rest.length, 'other comparison')}: no clear change, or too few answers`), h('ul', { class: 'verdicts' }, rest.map(verdictItem)))
             : null,
         ],
+    notCompared.length
+      ? h(
+          'details',
+          { class: 'not-compared', id: `${id}-not-compared`, open: notCompared.length <= 6 },
+          h('summary', {}, `Not compared (${count(notCompared.length)}): no share in a wave, or shares counted over different answers`),
+          h('ul', { class: 'verdicts' }, notCompared.map((n) => h('li', { class: 'verdict v-not-compared' }, h('span', { class: 'words' }, `\u201c${n.code}\u201d, ${n.from} \u2192 ${n.to}: `), h('span', { class: 'numbers' }, n.reason)))),
+        )
+      : null,
     h('h3', {}, 'Share of answers, wave by wave'),
-    h('p', { class: 'hint' }, 'Each dot is the share; its bar the 95% interval (Wilson). Bases under 30 are small; an interval wider than 20 points is imprecise.'),
+    h('p', { class: 'hint' }, 'Each dot is the share of the answers a person read; its bar the 95% interval (Wilson). A hollow dot is by rule: over the answers its rules ran on. Bases under 30 are small; an interval wider than 20 points is imprecise.'),
     q.codes.length === 0 ? h('p', { class: 'hint' }, 'No codes given yet.') : h('div', { class: 'small-multiples' }, q.codes.map((c) => shareChart(c, waves))),
     h('h3', {}, 'Codes that come together'),
     heatmap(q),
@@ -172,7 +193,7 @@ function verdictItem(c) {
   return h(
     'li',
     { class: `verdict v-${c.verdict.replaceAll(' ', '-')}` },
-    h('span', { class: 'words' }, sentence(c)),
+    h('span', { class: 'words' }, c.by_rule ? `${sentence(c)} (by rule)` : sentence(c)),
     h('span', { class: 'numbers' }, `${points(c.diff)} (95% interval ${signed(c.ci.lower)} to ${signed(c.ci.upper)}; adjusted p ${pValue(c.p_adjusted)})`),
   );
 }
@@ -198,20 +219,27 @@ function shareChart(c, waves) {
   chart.append(svg('line', { x1: pad.l, x2: W - pad.r, y1: y(0), y2: y(0), class: 'axis' }));
   chart.append(svg('text', { x: pad.l - 4, y: y(top) + 4, class: 'tick', 'text-anchor': 'end' }, `${Math.round(top * 100)}%`));
   chart.append(svg('text', { x: pad.l - 4, y: y(0) + 4, class: 'tick', 'text-anchor': 'end' }, '0'));
-  const path = [];
+  // One trend line per kind of share: read answers, and by rule (never joined to each other).
+  const paths = { read: [], rule: [] };
   waves.forEach((w, i) => {
     const s = c.waves[w];
     if (!s) return;
+    const path = paths[s.by_rule ? 'rule' : 'read'];
     path.push(`${path.length ? 'L' : 'M'}${x(i).toFixed(1)},${y(s.share).toFixed(1)}`);
     chart.append(svg('line', { x1: x(i), x2: x(i), y1: y(s.ci.lower), y2: y(s.ci.upper), class: `interval${s.small_base || s.imprecise ? ' weak' : ''}` }));
-    chart.append(svg('circle', { cx: x(i), cy: y(s.share), r: 3.5, class: 'dot' }));
+    chart.append(svg('circle', { cx: x(i), cy: y(s.share), r: 3.5, class: s.by_rule ? 'dot rule' : 'dot' }));
     chart.append(svg('text', { x: x(i), y: H - 8, class: 'tick', 'text-anchor': 'middle' }, w.length > 10 ? `${w.slice(0, 9)}\u2026` : w));
   });
-  chart.insertBefore(svg('path', { d: path.join(' '), class: 'trend' }), chart.firstChild);
+  for (const [kind, path] of Object.entries(paths)) {
+    if (path.length > 1) chart.insertBefore(svg('path', { d: path.join(' '), class: kind === 'rule' ? 'trend rule' : 'trend' }), chart.firstChild);
+  }
   const flags = [];
   for (const w of waves) {
     const s = c.waves[w];
-    if (!s) continue;
+    if (!s) {
+      if (c.no_share && c.no_share[w]) flags.push(`no share in ${w}: ${c.no_share[w]}`);
+      continue;
+    }
     if (s.small_base) flags.push(`small base in ${w} (${s.base})`);
     else if (s.imprecise) flags.push(`imprecise in ${w}`);
   }
@@ -219,7 +247,7 @@ function shareChart(c, waves) {
   return h(
     'figure',
     { class: 'share-chart' },
-    h('figcaption', {}, c.parent ? `${c.parent} \u203a ` : '', h('strong', {}, c.code), last ? ` \u00b7 ${pct(last.share)} in the latest wave (${last.count} of ${last.base})` : ''),
+    h('figcaption', {}, c.parent ? `${c.parent} \u203a ` : '', h('strong', {}, c.code), c.by_rule ? ' (by rule)' : '', last ? ` \u00b7 ${pct(last.share)} in the latest wave with a share (${last.count} of ${last.base} ${last.by_rule ? 'by rule' : 'read'})` : ''),
     chart,
     flags.length ? h('p', { class: 'flags' }, flags.join('; ')) : null,
   );
@@ -263,7 +291,8 @@ function heatmap(q) {
 }
 
 function saturation(s) {
-  if (s.coded === 0) return h('p', { class: 'hint' }, 'No answer coded by a person yet.');
+  if (s.coded === 0) return h('p', { class: 'hint', id: 'findings-saturation' }, 'No answer read by a person yet.');
+  if (s.observed === 0) return h('p', { class: 'hint', id: 'findings-saturation' }, `${plural(s.coded, 'answer')} read by a person; no code given to them yet.`);
   const W = 460;
   const H = 180;
   const pad = { l: 40, r: 16, t: 12, b: 30 };
@@ -271,7 +300,7 @@ function saturation(s) {
   const maxY = Math.max(1, s.observed, Number.isFinite(s.ci.upper) ? s.ci.upper : s.chao1) * 1.1;
   const x = (v) => pad.l + (v / maxX) * (W - pad.l - pad.r);
   const y = (v) => pad.t + (1 - v / maxY) * (H - pad.t - pad.b);
-  const chart = svg('svg', { viewBox: `0 0 ${W} ${H}`, width: W, height: H, role: 'img', 'aria-label': `Distinct codes against answers coded; Chao1 estimate ${s.chao1.toFixed(1)}` });
+  const chart = svg('svg', { viewBox: `0 0 ${W} ${H}`, width: W, height: H, role: 'img', 'aria-label': `Distinct codes against answers read; Chao1 estimate ${s.chao1.toFixed(1)}` });
   chart.append(svg('rect', { x: pad.l, width: W - pad.l - pad.r, y: y(Math.min(maxY, s.ci.upper)), height: Math.max(0, y(s.ci.lower) - y(Math.min(maxY, s.ci.upper))), class: 'band' }));
   chart.append(svg('line', { x1: pad.l, x2: W - pad.r, y1: y(s.chao1), y2: y(s.chao1), class: 'estimate' }));
   chart.append(svg('text', { x: W - pad.r, y: y(s.chao1) - 4, class: 'tick', 'text-anchor': 'end' }, `estimated ${s.chao1.toFixed(1)}`));
@@ -280,16 +309,16 @@ function saturation(s) {
   chart.append(svg('line', { x1: pad.l, x2: W - pad.r, y1: y(0), y2: y(0), class: 'axis' }));
   chart.append(svg('line', { x1: pad.l, x2: pad.l, y1: pad.t, y2: y(0), class: 'axis' }));
   chart.append(svg('text', { x: pad.l, y: H - 8, class: 'tick' }, '0'));
-  chart.append(svg('text', { x: W - pad.r, y: H - 8, class: 'tick', 'text-anchor': 'end' }, `${count(s.coded)} answers coded`));
+  chart.append(svg('text', { x: W - pad.r, y: H - 8, class: 'tick', 'text-anchor': 'end' }, `${count(s.coded)} answers read`));
   chart.append(svg('text', { x: pad.l - 6, y: y(s.observed) + 4, class: 'tick', 'text-anchor': 'end' }, String(s.observed)));
   const words =
     s.new_in_window === 0 && s.coded >= s.window
-      ? `The last ${s.window} coded answers brought no new code: coding looks close to complete.`
-      : `The last ${Math.min(s.window, s.coded)} coded answers brought ${plural(s.new_in_window, 'new code')}.`;
+      ? `The last ${s.window} answers read brought no new code: coding looks close to complete.`
+      : `The last ${Math.min(s.window, s.coded)} answers read brought ${plural(s.new_in_window, 'new code')}.`;
   return h(
     'figure',
     { class: 'saturation', id: 'findings-saturation' },
-    h('p', {}, `${plural(s.observed, 'code')} found in ${plural(s.coded, 'coded answer')}; Chao1 estimates ${s.chao1.toFixed(1)} in all (95% interval ${s.ci.lower.toFixed(1)} to ${Number.isFinite(s.ci.upper) ? s.ci.upper.toFixed(1) : 'open'}). ${words}`),
+    h('p', {}, `${plural(s.observed, 'code')} found in ${plural(s.coded, 'answer')} read by a person; Chao1 estimates ${s.chao1.toFixed(1)} in all (95% interval ${s.ci.lower.toFixed(1)} to ${Number.isFinite(s.ci.upper) ? s.ci.upper.toFixed(1) : 'open'}). ${words}`),
     chart,
   );
 }

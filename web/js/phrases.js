@@ -179,6 +179,7 @@ function show(found) {
         'section',
         { class: 'panel', 'aria-labelledby': 'h-phrases-keyness' },
         h('h2', { id: 'h-phrases-keyness' }, `What rose or fell: ${found.wave} against ${found.against}`),
+        h('p', { class: 'hint' }, 'A phrase rose or fell only where its p, adjusted for the many phrases compared (Benjamini\u2013Hochberg), is under 0.05, as in the findings; the rest show no clear change. Judge themes on the findings screen, wording here.'),
         found.keyness.length === 0
           ? h('p', { class: 'empty' }, 'No phrase differs clearly between these waves.')
           : h(
@@ -187,7 +188,7 @@ function show(found) {
               h(
                 'table',
                 { class: 'keyness', id: 'phrases-keyness' },
-                h('thead', {}, h('tr', {}, h('th', { scope: 'col' }, 'Phrase'), h('th', { scope: 'col' }, 'Direction'), h('th', { scope: 'col', class: 'num' }, found.wave), h('th', { scope: 'col', class: 'num' }, found.against), h('th', { scope: 'col', class: 'num' }, 'Log ratio'), h('th', { scope: 'col', class: 'num' }, 'p'))),
+                h('thead', {}, h('tr', {}, h('th', { scope: 'col' }, 'Phrase'), h('th', { scope: 'col' }, 'Direction'), h('th', { scope: 'col', class: 'num' }, found.wave), h('th', { scope: 'col', class: 'num' }, found.against), h('th', { scope: 'col', class: 'num' }, 'Log ratio'), h('th', { scope: 'col', class: 'num' }, 'p'), h('th', { scope: 'col', class: 'num' }, 'Adjusted p'))),
                 h(
                   'tbody',
                   {},
@@ -196,11 +197,14 @@ function show(found) {
                       'tr',
                       {},
                       h('th', { scope: 'row' }, h('button', { type: 'button', class: 'link', on: { click: () => goFind(phraseQuery(k.phrase)) } }, k.phrase)),
-                      h('td', { class: `dir dir-${k.direction}` }, k.direction === 'more' ? '▲ rose' : '▼ fell'),
+                      k.verdict === 'rose' || k.verdict === 'fell'
+                        ? h('td', { class: `dir dir-${k.direction}` }, k.verdict === 'rose' ? '\u25b2 rose' : '\u25bc fell')
+                        : h('td', { class: 'dir dir-none' }, 'no clear change'),
                       h('td', { class: 'num' }, count(k.focus)),
                       h('td', { class: 'num' }, count(k.reference)),
                       h('td', { class: 'num' }, k.log_ratio.toFixed(2)),
                       h('td', { class: 'num' }, k.p < 0.001 ? '< 0.001' : k.p.toFixed(3)),
+                      h('td', { class: 'num' }, k.p_adjusted < 0.001 ? '< 0.001' : k.p_adjusted.toFixed(3)),
                     ),
                   ),
                 ),

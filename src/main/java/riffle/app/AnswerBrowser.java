@@ -9,6 +9,7 @@ import java.util.Map;
 import riffle.coding.Codebook;
 import riffle.index.AnswerIndex;
 import riffle.index.QuerySyntaxException;
+import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.Code;
 import riffle.model.InputException;
@@ -49,10 +50,18 @@ public final class AnswerBrowser {
     String whole =
         text.isEmpty() ? filters : filters.isEmpty() ? text : "(" + text + ") AND " + filters;
     long[] ids = matches(index, whole, text, questions);
+    long[] readIds = store.readAnswerIds();
+    if (query.coded().isPresent() && !query.coded().get()) {
+      // "Not coded yet" leaves out the answers a person marked as read with no code applying.
+      ids = without(ids, readIds);
+    }
     int coded =
         whole.isEmpty()
             ? matches(index, "is:coded", "", questions).length
             : matches(index, "(" + whole + ") AND is:coded", text, questions).length;
+    long[] nonAnswers = store.nonAnswerIds();
+    int substantive = ids.length - common(ids, nonAnswers);
+    int read = common(without(ids, nonAnswers), readIds);
     int from = Math.min(query.offset(), ids.length);
     int to = Math.min(ids.length, from + query.limit());
     List<Long> page = new ArrayList<>(to - from);
@@ -64,6 +73,7 @@ public final class AnswerBrowser {
       numbers.put(questions.get(i), i + 1);
     }
     Map<Long, List<Assignment>> assigned = store.assignments(page);
+    Map<Long, AnswerRead> reads = store.reads(page);
     List<AnswerPage.Entry> entries = new ArrayList<>(page.size());
     for (ProjectStore.AnswerRow r : store.answerRows(page)) {
       entries.add(
@@ -76,9 +86,43 @@ public final class AnswerBrowser {
               r.masked(),
               r.substantive(),
               r.segments(),
-              assigned.getOrDefault(r.id(), List.of())));
+              assigned.getOrDefault(r.id(), List.of()),
+              reads.containsKey(r.id()),
+              reads.containsKey(r.id()) && reads.get(r.id()).marked()));
     }
-    return new AnswerPage(whole, ids.length, coded, from, entries);
+    return new AnswerPage(whole, ids.length, coded, substantive, read, from, entries);
+  }
+
+  /** How many ids two ascending arrays share. */
+  static int common(long[] a, long[] b) {
+    int n = 0;
+    for (int i = 0, j = 0; i < a.length && j < b.length; ) {
+      if (a[i] == b[j]) {
+        n++;
+        i++;
+        j++;
+      } else if (a[i] < b[j]) {
+        i++;
+      } else {
+        j++;
+      }
+    }
+    return n;
+  }
+
+  /** The ids of ascending {@code a} that ascending {@code b} lacks. */
+  static long[] without(long[] a, long[] b) {
+    long[] out = new long[a.length];
+    int n = 0;
+    for (int i = 0, j = 0; i < a.length; i++) {
+      while (j < b.length && b[j] < a[i]) {
+        j++;
+      }
+      if (j >= b.length || b[j] != a[i]) {
+        out[n++] = a[i];
+      }
+    }
+    return Arrays.copyOf(out, n);
   }
 
   /** How many answers carry each code, by code id (codes nobody used are left out). */

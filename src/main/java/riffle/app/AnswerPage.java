@@ -13,10 +13,19 @@ import riffle.model.Assignment;
  * @param query the whole query the filters made, in the analysts' query language
  * @param total answers matching it
  * @param coded how many of those carry at least one code
+ * @param substantive how many of those are substantive (the rest are non-answers, kept apart)
+ * @param read how many of the substantive ones a person has read (the coding's progress)
  * @param offset where this page starts among them (0 = first)
  * @param answers the page's answers, in id order
  */
-public record AnswerPage(String query, int total, int coded, int offset, List<Entry> answers) {
+public record AnswerPage(
+    String query,
+    int total,
+    int coded,
+    int substantive,
+    int read,
+    int offset,
+    List<Entry> answers) {
   public AnswerPage {
     Objects.requireNonNull(query, "query");
     answers = List.copyOf(answers);
@@ -34,6 +43,8 @@ public record AnswerPage(String query, int total, int coded, int offset, List<En
    * @param substantive false for a non-answer
    * @param segments the respondent's metadata
    * @param assignments its codes, in the order given
+   * @param read whether a person has read it (see {@link riffle.model.AnswerRead})
+   * @param marked whether it carries the "read, no code applies" mark
    */
   public record Entry(
       long id,
@@ -44,7 +55,9 @@ public record AnswerPage(String query, int total, int coded, int offset, List<En
       String text,
       boolean substantive,
       Map<String, String> segments,
-      List<Assignment> assignments) {
+      List<Assignment> assignments,
+      boolean read,
+      boolean marked) {
     public Entry {
       Objects.requireNonNull(respondent, "respondent");
       Objects.requireNonNull(wave, "wave");

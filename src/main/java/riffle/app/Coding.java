@@ -16,6 +16,7 @@ import riffle.coding.Codebook;
 import riffle.coding.CodebookFile;
 import riffle.coding.CodebookFile.Format;
 import riffle.index.QuerySyntaxException;
+import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.Code;
 import riffle.model.CodeDraft;
@@ -594,6 +595,51 @@ public final class Coding {
         });
   }
 
+  /**
+   * Marks an answer as read by the coder with no (further) code applying, so that it counts in the
+   * bases of the findings as an answer without those codes. Its codes, if it has any, stay.
+   */
+  public EditOutcome markRead(String coder, long answerId) throws InputException {
+    return store.edit(
+        coder,
+        "mark-read",
+        e -> {
+          answerText(e, answerId);
+          if (e.markedRead(answerId)) {
+            return "Answer " + answerId + " is marked as read already.";
+          }
+          e.putRead(answerId);
+          e.note("answer", answerId);
+          return "Marked answer " + answerId + " as read: no other code applies.";
+        });
+  }
+
+  /**
+   * Takes the "read, no code applies" mark off an answer. The answer stays read while it carries a
+   * code a person gave or a person took a code off it.
+   */
+  public EditOutcome unmarkRead(String coder, long answerId) throws InputException {
+    return store.edit(
+        coder,
+        "unmark-read",
+        e -> {
+          answerText(e, answerId);
+          if (!e.markedRead(answerId)) {
+            return "Answer " + answerId + " has no \"read, no code applies\" mark.";
+          }
+          e.removeRead(answerId);
+          e.note("answer", answerId);
+          return "Took the \"read, no code applies\" mark off answer " + answerId + ".";
+        });
+  }
+
+  /**
+   * Which of the given answers a person has read, by whom and when first (unread ones left out).
+   */
+  public Map<Long, AnswerRead> reads(Collection<Long> answerIds) throws InputException {
+    return store.reads(answerIds);
+  }
+
   /** Takes back the coder's newest change still in effect. */
   public EditOutcome undo(String coder) throws InputException {
     return store.undo(coder);
@@ -742,6 +788,7 @@ public final class Coding {
         e -> {
           int given = 0;
           int keptOff = 0;
+          Set<Long> coded = new HashSet<>();
           for (int i = 0; i < rules.size(); i++) {
             Rule r = rules.get(i);
             Code c = Codebook.byId(e.codes(), r.codeId());
@@ -764,18 +811,22 @@ public final class Coding {
               e.putAssignment(
                   new Assignment(answer, r.codeId(), Optional.empty(), coder, Origin.RULE, e.at()));
               has.add(answer);
+              coded.add(answer);
               given++;
             }
           }
           e.note("rules", rules.size());
-          e.note("coded", given);
+          e.note("coded", coded.size());
+          e.note("given", given);
           e.note("kept_off", keptOff);
           return "Applied "
               + rules.size()
               + " rule(s): "
+              + coded.size()
+              + " answer(s) coded, "
               + given
-              + " answer(s) coded"
-              + (keptOff > 0 ? ", " + keptOff + " left alone where a person removed the code" : "")
+              + " code(s) given"
+              + (keptOff > 0 ? "; " + keptOff + " left alone where a person removed the code" : "")
               + ".";
         });
   }

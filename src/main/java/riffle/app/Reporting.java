@@ -9,10 +9,12 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
+import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.Code;
 import riffle.model.Findings;
 import riffle.model.InputException;
+import riffle.model.Origin;
 import riffle.report.CodedExport;
 import riffle.report.ExportAnswer;
 import riffle.report.ExportAssignment;
@@ -38,7 +40,8 @@ public final class Reporting {
       List<String> waves,
       List<Code> codes,
       List<ProjectStore.AnswerRow> rows,
-      Map<Long, List<Assignment>> assignments) {}
+      Map<Long, List<Assignment>> assignments,
+      Map<Long, AnswerRead> reads) {}
 
   private Loaded load(Optional<String> question) throws InputException {
     List<String> questions = store.questions();
@@ -48,7 +51,12 @@ public final class Reporting {
     List<Long> ids = new ArrayList<>(rows.size());
     rows.forEach(r -> ids.add(r.id()));
     return new Loaded(
-        only.map(List::of).orElse(questions), waves, store.codes(), rows, store.assignments(ids));
+        only.map(List::of).orElse(questions),
+        waves,
+        store.codes(),
+        rows,
+        store.assignments(ids),
+        store.reads());
   }
 
   /**
@@ -74,13 +82,15 @@ public final class Reporting {
     List<ReportAnswer> answers = new ArrayList<>(l.rows.size());
     for (ProjectStore.AnswerRow r : l.rows) {
       List<Assignment> as = l.assignments.getOrDefault(r.id(), List.of());
+      AnswerRead read = l.reads.get(r.id());
       Set<String> codes = new HashSet<>();
-      long first = Long.MAX_VALUE;
+      Set<String> byRule = new HashSet<>();
       for (Assignment a : as) {
         codes.add(Long.toString(a.codeId()));
-        if (a.origin().human()) {
-          // Coding order: when a person first coded it (ties, such as one import, in answer order).
-          first = Math.min(first, a.at().toEpochMilli());
+        // A rule's code counts as a person's when it was on the answer while they read it; one a
+        // rule gave later, or to an answer nobody read, is the rule's alone.
+        if (a.origin() == Origin.RULE && (read == null || a.at().isAfter(read.last()))) {
+          byRule.add(Long.toString(a.codeId()));
         }
       }
       answers.add(
@@ -91,7 +101,10 @@ public final class Reporting {
               r.substantive(),
               codes,
               r.segments(),
-              first == Long.MAX_VALUE ? OptionalLong.empty() : OptionalLong.of(first)));
+              // Reading order: when a person first read it (ties, such as one import, in id order).
+              read == null ? OptionalLong.empty() : OptionalLong.of(read.first().toEpochMilli()),
+              read != null,
+              byRule));
     }
     return Report.compute(
         new ReportInput(l.questions, l.waves, codebook(l.codes), answers), settings);
@@ -135,7 +148,8 @@ public final class Reporting {
               r.substantive(),
               r.masked(),
               r.segments(),
-              as));
+              as,
+              l.reads.containsKey(r.id()) ? l.reads.get(r.id()).readers() : List.of()));
     }
     CodedExport export = new CodedExport(codebook(l.codes), answers);
     return longFormat

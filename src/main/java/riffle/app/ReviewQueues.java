@@ -11,6 +11,7 @@ import java.util.OptionalInt;
 import java.util.OptionalLong;
 import java.util.Set;
 import riffle.coding.ReviewOrder;
+import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.InputException;
 import riffle.model.ReadSample;
@@ -193,6 +194,7 @@ public final class ReviewQueues {
       rows.put(row.id(), row);
     }
     Map<Long, List<Assignment>> assigned = store.assignments(ids);
+    Map<Long, AnswerRead> reads = store.reads(ids);
     List<QueuePage.Item> out = new ArrayList<>(positions.size());
     for (int p : positions) {
       long id = q.order[p];
@@ -210,7 +212,9 @@ public final class ReviewQueues {
                   row.masked(),
                   row.substantive(),
                   row.segments(),
-                  assigned.getOrDefault(id, List.of()))));
+                  assigned.getOrDefault(id, List.of()),
+                  reads.containsKey(id),
+                  reads.containsKey(id) && reads.get(id).marked())));
     }
     return out;
   }

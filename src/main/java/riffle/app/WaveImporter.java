@@ -202,9 +202,11 @@ final class WaveImporter {
         Column t = texts.get(q);
         String original = row.cell(t);
         List<String> assigned = new ArrayList<>();
+        boolean codedElsewhere = false;
         for (Column c : codes) {
           if (c.answersColumn() == t.index()) {
             assigned.addAll(CodeList.split(row.cell(c)));
+            codedElsewhere = true;
           }
         }
         answers.add(
@@ -217,7 +219,8 @@ final class WaveImporter {
                 t.index() + 1,
                 assigned,
                 coderName,
-                known[r][q] ? Analyses.unanalysed(normalized[r][q]) : analyses.next()));
+                known[r][q] ? Analyses.unanalysed(normalized[r][q]) : analyses.next(),
+                codedElsewhere));
       }
       out.add(
           new NewRespondent(

@@ -11,13 +11,15 @@ import picocli.CommandLine.Spec;
 import riffle.model.InputException;
 import riffle.model.Span;
 
-/** {@code riffle code}: gives a code to an answer or takes it off. */
+/** {@code riffle code}: gives a code to an answer, takes it off, or marks the answer as read. */
 @Command(
     name = "code",
     mixinStandardHelpOptions = true,
     description = {
       "Gives a code to an answer (--add, optionally --span START:END of the words that carry it),",
-      "takes it off (--remove; rules will not give it back), or accepts a suggestion (--accept)."
+      "takes it off (--remove; rules will not give it back), accepts a suggestion (--accept), or",
+      "marks the answer as read with no (other) code applying (--none; --none-off takes the mark",
+      "off, and so does riffle undo). Findings count only answers a person has read."
     })
 final class CodeCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
@@ -39,6 +41,12 @@ final class CodeCommand implements Callable<Integer> {
 
     @Option(names = "--accept", paramLabel = "CODE", description = "Accept this suggested code.")
     String accept;
+
+    @Option(names = "--none", description = "Mark the answer as read: no (other) code applies.")
+    boolean none;
+
+    @Option(names = "--none-off", description = "Take the --none mark off the answer.")
+    boolean noneOff;
   }
 
   @Option(
@@ -62,6 +70,12 @@ final class CodeCommand implements Callable<Integer> {
           }
           if (what.remove != null) {
             return c.unassign(coder, answer, c.code(what.remove).id());
+          }
+          if (what.none) {
+            return c.markRead(coder, answer);
+          }
+          if (what.noneOff) {
+            return c.unmarkRead(coder, answer);
           }
           return c.accept(coder, answer, c.code(what.accept).id());
         });

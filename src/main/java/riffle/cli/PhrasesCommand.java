@@ -19,6 +19,7 @@ import riffle.model.InputException;
 import riffle.model.KeyPhrase;
 import riffle.model.Phrase;
 import riffle.model.PhraseCluster;
+import riffle.model.WaveChange;
 
 /** {@code riffle phrases}: what buyers keep saying, what they say together, what changed. */
 @Command(
@@ -103,18 +104,23 @@ final class PhrasesCommand implements Callable<Integer> {
     }
     if (!found.keyness().isEmpty()) {
       out.printf(
-          Locale.ROOT, "%n%s against %s%n", found.wave().orElse(""), found.against().orElse(""));
+          Locale.ROOT,
+          "%n%s against %s (rose or fell only where the adjusted p is under %.2f)%n",
+          found.wave().orElse(""),
+          found.against().orElse(""),
+          WaveChange.SIGNIFICANCE);
       for (KeyPhrase k : found.keyness()) {
         out.printf(
             Locale.ROOT,
-            "  %-40s %4s  %d vs %d  G²=%.2f  log ratio %.2f  p=%.4f%n",
+            "  %-40s %-15s  %d vs %d  G²=%.2f  log ratio %.2f  p=%.4f  adjusted p=%.4f%n",
             k.phrase(),
-            k.direction(),
+            k.verdict(),
             k.focus(),
             k.reference(),
             k.logLikelihood(),
             k.logRatio(),
-            k.p());
+            k.p(),
+            k.pAdjusted());
       }
     }
     return 0;

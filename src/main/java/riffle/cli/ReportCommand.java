@@ -2,6 +2,8 @@ package riffle.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Collection;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
@@ -15,10 +17,13 @@ import riffle.app.FindingsQuery;
 import riffle.app.Project;
 import riffle.app.Reporting;
 import riffle.model.CodeFrequency;
+import riffle.model.Coverage;
 import riffle.model.Findings;
 import riffle.model.InputException;
+import riffle.model.NotCompared;
 import riffle.model.QuestionFindings;
 import riffle.model.Saturation;
+import riffle.model.SegmentFindings;
 import riffle.model.Share;
 import riffle.model.WaveChange;
 
@@ -106,18 +111,27 @@ final class ReportCommand implements Callable<Integer> {
 
   private static void print(PrintWriter out, QuestionFindings q) {
     out.println(q.question());
-    StringBuilder bases = new StringBuilder("  Answers counted:");
-    q.bases().forEach((w, n) -> bases.append(' ').append(w).append(' ').append(n).append(';'));
-    out.println(bases.substring(0, bases.length() - 1));
+    StringBuilder read = new StringBuilder("  Answers read by a person:");
+    int nonAnswers = 0;
+    for (Map.Entry<String, Coverage> w : q.coverage().entrySet()) {
+      read.append(' ').append(w.getKey()).append(' ').append(coverage(w.getValue())).append(';');
+      nonAnswers += w.getValue().nonAnswers();
+    }
+    out.println(
+        read.substring(0, read.length() - 1)
+            + (nonAnswers > 0 ? " (" + nonAnswers + " non-answers counted nowhere)" : ""));
     if (!q.notCoded().isEmpty()) {
-      out.println("  Not coded yet, so left out: " + String.join(", ", q.notCoded()));
+      out.println(
+          "  No answer read by a person yet in "
+              + String.join(", ", q.notCoded())
+              + ": codes given by hand have no share there");
     }
     if (!q.changes().isEmpty()) {
       out.println("  What changed");
       for (WaveChange c : q.changes()) {
         out.printf(
             Locale.ROOT,
-            "    %-28s %-24s %s → %s: %+.1f points (95%% CI %+.1f to %+.1f; p %.3g, adjusted %.3g)%n",
+            "    %-28s %-24s %s → %s: %+.1f points (95%% CI %+.1f to %+.1f; p %.3g, adjusted %.3g)%s%n",
             c.code(),
             c.verdict(),
             c.from(),
@@ -126,43 +140,92 @@ final class ReportCommand implements Callable<Integer> {
             100 * c.ci().lower(),
             100 * c.ci().upper(),
             c.p(),
-            c.pAdjusted());
+            c.pAdjusted(),
+            c.byRule() ? " by rule" : "");
       }
     }
-    out.println("  Shares (95% interval; * small base, ~ imprecise)");
-    for (CodeFrequency f : q.codes()) {
-      StringBuilder line =
-          new StringBuilder(
-              String.format(
-                  Locale.ROOT, "    %s%-28s", f.parent().isPresent() ? "  " : "", f.code()));
-      for (Map.Entry<String, Share> w : f.waves().entrySet()) {
-        Share s = w.getValue();
-        line.append(
-            String.format(
-                Locale.ROOT,
-                "  %s %s (%s–%s)%s",
-                w.getKey(),
-                pct(s.share()),
-                pct(s.ci().lower()),
-                pct(s.ci().upper()),
-                (s.smallBase() ? "*" : "") + (s.imprecise() ? "~" : "")));
+    if (!q.notCompared().isEmpty()) {
+      out.println("  Not compared");
+      for (NotCompared n : q.notCompared()) {
+        out.printf(Locale.ROOT, "    %-28s %s → %s: %s%n", n.code(), n.from(), n.to(), n.reason());
       }
-      out.println(line);
+    }
+    out.println(
+        "  Shares of the answers read (95% interval; * small base, ~ imprecise; by rule: over the"
+            + " answers its rules ran on)");
+    shares(out, q.codes(), q.bases().keySet(), "    ");
+    for (SegmentFindings seg : q.segments()) {
+      StringBuilder line =
+          new StringBuilder("  " + seg.segment() + " = " + seg.value() + ": read by a person");
+      seg.coverage()
+          .forEach(
+              (w, c) -> line.append(' ').append(w).append(' ').append(coverage(c)).append(';'));
+      out.println(line.substring(0, line.length() - 1));
+      shares(out, seg.codes(), seg.bases().keySet(), "      ");
     }
     Saturation s = q.saturation();
-    if (s != null && s.coded() > 0) {
+    if (s.coded() == 0) {
+      out.println("  Saturation: no answer read by a person yet");
+    } else if (s.observed() == 0) {
+      out.printf(
+          Locale.ROOT, "  Saturation: %d answers read by a person, no code given yet%n", s.coded());
+    } else {
       out.printf(
           Locale.ROOT,
-          "  Saturation: %d codes in %d coded answers; about %.1f exist (95%% CI %.1f–%.1f); the"
-              + " last %d coded answers brought %d new code(s)%n",
+          "  Saturation: %d codes in %d answers read by a person; about %.1f exist (95%% CI"
+              + " %.1f–%.1f); the last %d answers read brought %d new code(s)%n",
           s.observed(),
           s.coded(),
           s.chao1(),
           s.ci().lower(),
           s.ci().upper(),
-          s.window(),
+          Math.min(s.window(), s.coded()),
           s.newInWindow());
     }
     out.println();
+  }
+
+  /** "read 112 of 580 (19%)". */
+  static String coverage(Coverage c) {
+    return String.format(
+        Locale.ROOT, "read %d of %d (%.0f%%)", c.read(), c.answers(), 100 * c.share());
+  }
+
+  private static void shares(
+      PrintWriter out, List<CodeFrequency> codes, Collection<String> waves, String indent) {
+    for (CodeFrequency f : codes) {
+      StringBuilder line =
+          new StringBuilder(
+              String.format(
+                  Locale.ROOT,
+                  "%s%s%-28s",
+                  indent,
+                  f.parent().isPresent() ? "  " : "",
+                  f.code() + (f.byRule() ? " (by rule)" : "")));
+      for (String wave : waves) {
+        Share s = f.waves().get(wave);
+        if (s == null) {
+          line.append("  ")
+              .append(wave)
+              .append(" no share (")
+              .append(f.noShare().getOrDefault(wave, ""))
+              .append(')');
+          continue;
+        }
+        line.append(
+            String.format(
+                Locale.ROOT,
+                "  %s %s (%s–%s) %d/%d%s%s",
+                wave,
+                pct(s.share()),
+                pct(s.ci().lower()),
+                pct(s.ci().upper()),
+                s.count(),
+                s.base(),
+                (s.smallBase() ? "*" : "") + (s.imprecise() ? "~" : ""),
+                s.byRule() && !f.byRule() ? " by rule" : ""));
+      }
+      out.println(line);
+    }
   }
 }

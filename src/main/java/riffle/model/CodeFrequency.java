@@ -15,7 +15,11 @@ import java.util.Optional;
  * @param theme whether the code has codes under it; its counts then include theirs, each answer
  *     counted once
  * @param direction "praise", "friction" or "neutral"
- * @param waves the share in each wave, in wave order
+ * @param waves the share in each wave that has one, in wave order
+ * @param byRule whether no person gave the code (or a code under it) to any answer of the question:
+ *     every share of it is by rule
+ * @param noShare the waves of the findings in which the code has no share, each with the reason in
+ *     words (such as "no answer of Wave 2 read by a person yet")
  */
 public record CodeFrequency(
     String code,
@@ -23,13 +27,16 @@ public record CodeFrequency(
     Optional<String> parent,
     boolean theme,
     String direction,
-    Map<String, Share> waves) {
-  /** Checks the components and copies the map, keeping the waves' order. */
+    Map<String, Share> waves,
+    boolean byRule,
+    Map<String, String> noShare) {
+  /** Checks the components and copies the maps, keeping the waves' order. */
   public CodeFrequency {
     Objects.requireNonNull(code, "code");
     Objects.requireNonNull(codeId, "codeId");
     Objects.requireNonNull(parent, "parent");
     Objects.requireNonNull(direction, "direction");
     waves = Collections.unmodifiableMap(new LinkedHashMap<>(waves));
+    noShare = Collections.unmodifiableMap(new LinkedHashMap<>(noShare));
   }
 }

@@ -15,6 +15,8 @@ import java.util.Objects;
  * @param p the p-value of the log-likelihood (chi-square, one degree of freedom)
  * @param pAdjusted {@code p} adjusted by Benjamini–Hochberg across every phrase compared
  * @param direction "more" when its share is at least as high in the focus, else "less"
+ * @param verdict "rose" or "fell" (in the focus, against the reference) only when {@code pAdjusted}
+ *     is under {@link WaveChange#SIGNIFICANCE}, the findings' threshold; else "no clear change"
  */
 public record KeyPhrase(
     String phrase,
@@ -24,10 +26,20 @@ public record KeyPhrase(
     double logRatio,
     double p,
     double pAdjusted,
-    String direction) {
+    String direction,
+    String verdict) {
   /** Checks the components. */
   public KeyPhrase {
     Objects.requireNonNull(phrase, "phrase");
     Objects.requireNonNull(direction, "direction");
+    Objects.requireNonNull(verdict, "verdict");
+  }
+
+  /** The verdict the findings' rule allows for a phrase with this direction and adjusted p. */
+  public static String verdict(String direction, double pAdjusted) {
+    if (!(pAdjusted < WaveChange.SIGNIFICANCE)) {
+      return WaveChange.NO_CLEAR_CHANGE;
+    }
+    return direction.equals("more") ? WaveChange.ROSE : WaveChange.FELL;
   }
 }

@@ -15,6 +15,8 @@ import java.util.Objects;
  * @param codes codes assigned elsewhere, in the order given; empty when none
  * @param coder who assigned {@code codes}
  * @param analysis the text analysis of {@code normalized}: masked text, language, masks, parse
+ * @param codedElsewhere whether a codes column of the export covers this answer: then it was read
+ *     by {@code coder}, with or without codes
  */
 public record NewAnswer(
     String question,
@@ -25,7 +27,8 @@ public record NewAnswer(
     int column,
     List<String> codes,
     String coder,
-    Analysis analysis) {
+    Analysis analysis,
+    boolean codedElsewhere) {
   public NewAnswer {
     Objects.requireNonNull(question, "question");
     Objects.requireNonNull(original, "original");
@@ -33,5 +36,33 @@ public record NewAnswer(
     codes = List.copyOf(codes);
     Objects.requireNonNull(coder, "coder");
     Objects.requireNonNull(analysis, "analysis");
+    if (!codes.isEmpty() && !codedElsewhere) {
+      throw new IllegalArgumentException(
+          "an answer with codes from the export was coded elsewhere");
+    }
+  }
+
+  /** An answer coded elsewhere exactly when the export gives it codes. */
+  public NewAnswer(
+      String question,
+      String original,
+      String normalized,
+      boolean substantive,
+      long line,
+      int column,
+      List<String> codes,
+      String coder,
+      Analysis analysis) {
+    this(
+        question,
+        original,
+        normalized,
+        substantive,
+        line,
+        column,
+        codes,
+        coder,
+        analysis,
+        !codes.isEmpty());
   }
 }

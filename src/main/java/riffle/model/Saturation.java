@@ -6,13 +6,14 @@ import java.util.Objects;
 /**
  * Whether coding has found (nearly) all the codes a question's answers call for.
  *
- * @param coded answers coded by a person so far
- * @param observed distinct codes given to them
+ * @param coded substantive answers a person has read so far (coded, or marked as read with no code
+ *     applying); 0 before anyone has read one
+ * @param observed distinct codes they carry
  * @param chao1 the bias-corrected Chao1 estimate of how many codes there are
  * @param ci its 95% log-linear interval
- * @param curve distinct codes against answers coded, in coding order (thinned to at most a few
+ * @param curve distinct codes against answers read, in reading order (thinned to at most a few
  *     hundred points, always keeping the points where a new code appeared and the last one)
- * @param window how many of the latest coded answers {@code newInWindow} looks at (50)
+ * @param window how many of the latest read answers {@code newInWindow} looks at (50)
  * @param newInWindow codes first given in those latest answers
  */
 public record Saturation(

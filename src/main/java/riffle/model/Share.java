@@ -5,12 +5,15 @@ import java.util.Objects;
 /**
  * How many answers of one wave carry a code, out of the wave's base.
  *
- * @param count substantive answers carrying the code (or, for a theme, any of its codes)
- * @param base substantive answers to the question in the wave
+ * @param count answers of the base carrying the code (or, for a theme, any of its codes)
+ * @param base the answers the share is over: the substantive answers to the question in the wave
+ *     that a person has read, or, {@code byRule}, all of them (the answers its rules ran on)
  * @param share count / base (0 when the base is 0)
  * @param ci the 95% Wilson score interval of the share
  * @param smallBase whether the base is under 30 (see {@code riffle.report})
  * @param imprecise whether the interval is wider than 20 percentage points
+ * @param byRule whether the code is given only by rules here, so the share counts what its rules
+ *     found, over the answers they ran on, and no person's reading
  */
 public record Share(
     int count,
@@ -18,7 +21,8 @@ public record Share(
     double share,
     ConfidenceInterval ci,
     boolean smallBase,
-    boolean imprecise) {
+    boolean imprecise,
+    boolean byRule) {
   /** Checks the components. */
   public Share {
     Objects.requireNonNull(ci, "ci");

@@ -16,6 +16,8 @@ import java.util.Objects;
  *     two waves
  * @param verdict "rose", "fell", "no clear change" or "too few answers to tell" (rule in {@code
  *     riffle.report})
+ * @param byRule whether both shares are by rule (over the answers its rules ran on), not over the
+ *     answers people read
  */
 public record WaveChange(
     String code,
@@ -26,7 +28,11 @@ public record WaveChange(
     ConfidenceInterval ci,
     double p,
     double pAdjusted,
-    String verdict) {
+    String verdict,
+    boolean byRule) {
+  /** The adjusted p-value below which a change may be called a rise or a fall. */
+  public static final double SIGNIFICANCE = 0.05;
+
   /** "The share rose": the adjusted p is below 0.05 and the interval lies above zero. */
   public static final String ROSE = "rose";
 

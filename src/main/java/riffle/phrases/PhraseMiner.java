@@ -182,6 +182,7 @@ public final class PhraseMiner {
       int b = mining.grams.answers(node, 1);
       double g2 = ll.get(node);
       double ratio = Keyness.logRatio(a, b, c, d);
+      String direction = a * (double) d >= b * (double) c ? "more" : "less";
       out.add(
           new KeyPhrase(
               p.label(),
@@ -191,7 +192,8 @@ public final class PhraseMiner {
               ratio,
               ChiSquare.upperTailDf1(g2),
               adjustedOf.get(node),
-              a * (double) d >= b * (double) c ? "more" : "less"));
+              direction,
+              KeyPhrase.verdict(direction, adjustedOf.get(node))));
     }
     out.sort(
         Comparator.comparingDouble((KeyPhrase k) -> -k.logLikelihood())

@@ -1,11 +1,13 @@
 package riffle.report;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 /**
  * The active (not archived) codes in display order, each with a bit index, and for each code the
@@ -136,12 +138,29 @@ final class Codebook {
    * @throws IllegalArgumentException when a code id is not in the codebook
    */
   void mark(ReportAnswer answer, long[] into, boolean withAncestors) {
-    for (String id : answer.codes()) {
+    mark(answer.id(), answer.codes(), Set.of(), into, withAncestors);
+  }
+
+  /**
+   * ORs into {@code into} the bits of the codes {@code ids} but {@code except}, as {@link #mark}.
+   *
+   * @throws IllegalArgumentException when a code id is not in the codebook
+   */
+  void mark(
+      String answerId,
+      Collection<String> ids,
+      Set<String> except,
+      long[] into,
+      boolean withAncestors) {
+    for (String id : ids) {
+      if (except.contains(id)) {
+        continue;
+      }
       Integer i = indexById.get(id);
       if (i == null) {
         if (!all.containsKey(id)) {
           throw new IllegalArgumentException(
-              "answer " + answer.id() + " carries code " + id + ", which is not in the codebook");
+              "answer " + answerId + " carries code " + id + ", which is not in the codebook");
         }
         continue; // archived
       }

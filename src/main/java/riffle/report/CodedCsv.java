@@ -21,7 +21,9 @@ final class CodedCsv {
       metaKeys.addAll(a.metadata().keySet());
     }
     List<String> header =
-        new ArrayList<>(List.of("answer_id", "respondent", "wave", "question", "substantive"));
+        new ArrayList<>(
+            List.of(
+                "answer_id", "respondent", "wave", "question", "substantive", "read", "read_by"));
     header.addAll(metaKeys);
     header.add("text");
     header.addAll(codeHeaders(codebook));
@@ -34,6 +36,8 @@ final class CodedCsv {
       row.add(a.wave());
       row.add(a.question());
       row.add(a.substantive() ? "1" : "0");
+      row.add(a.read() ? "1" : "0");
+      row.add(String.join("; ", a.readBy()));
       for (String key : metaKeys) {
         row.add(a.metadata().getOrDefault(key, ""));
       }
@@ -48,8 +52,11 @@ final class CodedCsv {
               a.id(), a.wave(), a.question(), true, ids, Map.of(), OptionalLong.empty()),
           bits,
           true);
+      // 0 says a person read the answer and did not give the code; nobody has read an unread
+      // answer, so its cell stays blank unless a rule gave it the code.
+      String absent = a.read() ? "0" : "";
       for (int i = 0; i < codebook.size(); i++) {
-        row.add((bits[i >>> 6] & (1L << i)) != 0 ? "1" : "0");
+        row.add((bits[i >>> 6] & (1L << i)) != 0 ? "1" : absent);
       }
       csv.row(row);
     }
@@ -82,6 +89,8 @@ final class CodedCsv {
                     "respondent",
                     "wave",
                     "question",
+                    "read",
+                    "read_by",
                     "code_id",
                     "code",
                     "archived",
@@ -91,6 +100,29 @@ final class CodedCsv {
                     "span_end",
                     "passage"));
     for (ExportAnswer a : export.answers()) {
+      String read = a.read() ? "1" : "0";
+      String readBy = String.join("; ", a.readBy());
+      if (a.assignments().isEmpty() && a.read()) {
+        // Read with no code applying: one row without a code, so that the file holds every read
+        // answer (an answer with no row was not read).
+        csv.row(
+            List.of(
+                a.id(),
+                a.respondent(),
+                a.wave(),
+                a.question(),
+                read,
+                readBy,
+                "",
+                "",
+                "",
+                "",
+                "",
+                "",
+                "",
+                ""));
+        continue;
+      }
       for (ExportAssignment as : a.assignments()) {
         ReportCode code = codes.get(as.codeId());
         if (code == null) {
@@ -117,6 +149,8 @@ final class CodedCsv {
                 a.respondent(),
                 a.wave(),
                 a.question(),
+                read,
+                readBy,
                 code.id(),
                 code.name(),
                 code.archived() ? "1" : "0",

@@ -17,6 +17,9 @@ import java.util.TreeMap;
  * @param maskedText the answer with personal data masked (exports never carry the original)
  * @param metadata the respondent's metadata, column → value
  * @param assignments the codes given to the answer
+ * @param readBy who read it (coded it, marked it as read with no code applying, or coded it
+ *     elsewhere), first reader first; empty while nobody has: its code cells are then unknown, not
+ *     0
  */
 public record ExportAnswer(
     String id,
@@ -26,7 +29,8 @@ public record ExportAnswer(
     boolean substantive,
     String maskedText,
     Map<String, String> metadata,
-    List<ExportAssignment> assignments) {
+    List<ExportAssignment> assignments,
+    List<String> readBy) {
   /** Checks the components and copies the collections. */
   public ExportAnswer {
     Objects.requireNonNull(id, "id");
@@ -36,5 +40,11 @@ public record ExportAnswer(
     Objects.requireNonNull(maskedText, "maskedText");
     metadata = Collections.unmodifiableMap(new TreeMap<>(metadata));
     assignments = List.copyOf(assignments);
+    readBy = List.copyOf(readBy);
+  }
+
+  /** Whether a person has read the answer. */
+  public boolean read() {
+    return !readBy.isEmpty();
   }
 }

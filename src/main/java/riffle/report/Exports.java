@@ -6,8 +6,8 @@ import riffle.model.Findings;
 
 /**
  * Writes findings and coded answers as files analysts hand on: the report as one self-contained
- * HTML page or as Markdown, the coded answers as CSV (wide: one row per answer and one 0/1 column
- * per code; long: one row per code given), and the codebook as CSV or Markdown.
+ * HTML page or as Markdown, the coded answers as CSV (wide: one row per answer and one column per
+ * code, 1/0 on read answers; long: one row per code given), and the codebook as CSV or Markdown.
  *
  * <p>Every method returns the whole document as a string, to be written as UTF-8. Answer text is
  * the masked text only. In HTML all project text is escaped and never becomes markup; in Markdown,
@@ -30,9 +30,11 @@ public final class Exports {
   }
 
   /**
-   * One row per answer: id, respondent, wave, question, substantive (1/0), one column per metadata
-   * key (sorted), the masked text, then one 0/1 column per active code in codebook order, 1 when
-   * the answer carries the code or a code below it (as the findings count).
+   * One row per answer: id, respondent, wave, question, substantive (1/0), read (1/0) and read_by
+   * (who read it, "; " between names), one column per metadata key (sorted), the masked text, then
+   * one column per active code in codebook order: 1 when the answer carries the code or a code
+   * below it (as the findings count), 0 when a person read it and it does not, blank when nobody
+   * has read it (unknown, not absent).
    *
    * @throws IllegalArgumentException when an answer carries a code the codebook does not have
    */
@@ -41,9 +43,10 @@ public final class Exports {
   }
 
   /**
-   * One row per code given: answer, respondent, wave, question, code id and name, archived (1/0),
-   * coder, origin, and the span (start, end, passage of the masked text; empty for the whole
-   * answer).
+   * One row per code given: answer, respondent, wave, question, read (1/0) and read_by of the
+   * answer, code id and name, archived (1/0), coder, origin, and the span (start, end, passage of
+   * the masked text; empty for the whole answer). An answer a person read without giving it a code
+   * has one row with the code's columns empty; an answer with no row was not read.
    *
    * @throws IllegalArgumentException when an answer carries a code the codebook does not have
    */

@@ -1,6 +1,7 @@
 package riffle.report;
 
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -10,9 +11,11 @@ import java.util.Optional;
 import riffle.model.CodeFrequency;
 import riffle.model.Cooccurrence;
 import riffle.model.Findings;
+import riffle.model.NotCompared;
 import riffle.model.QuestionFindings;
 import riffle.model.Saturation;
 import riffle.model.SaturationPoint;
+import riffle.model.SegmentFindings;
 import riffle.model.Share;
 import riffle.model.WaveChange;
 
@@ -50,9 +53,11 @@ final class HtmlReport {
         .append(CSS)
         .append("</style>\n</head>\n<body>\n<h1>")
         .append(esc(title))
-        .append("</h1>\n<p class=\"muted\">Shares are of substantive answers, with 95% Wilson ")
-        .append("intervals. “Small base”: under 30 answers; “imprecise”: interval wider than 20 ")
-        .append("points (common practice, after the NCHS 2017 standards for proportions).</p>\n");
+        .append("</h1>\n<p class=\"muted\">Shares are of the substantive answers a person has ")
+        .append("read, with 95% Wilson intervals; a code only rules give is counted over the ")
+        .append("answers its rules ran on and marked “by rule”. “Small base”: under 30 answers; ")
+        .append("“imprecise”: interval wider than 20 points (common practice, after the NCHS 2017 ")
+        .append("standards for proportions).</p>\n");
     for (QuestionFindings q : findings.questions()) {
       question(h, q);
     }
@@ -61,16 +66,17 @@ final class HtmlReport {
   }
 
   private static void question(StringBuilder h, QuestionFindings q) {
-    h.append("<section>\n<h2>").append(esc(q.question())).append("</h2>\n<p>Bases: ");
-    List<String> bases = new ArrayList<>();
-    q.bases().forEach((wave, base) -> bases.add(esc(wave) + " " + base));
-    h.append(String.join(" · ", bases)).append("</p>\n");
+    h.append("<section>\n<h2>")
+        .append(esc(q.question()))
+        .append("</h2>\n<p class=\"coverage\">Answers read by a person: ")
+        .append(Text.coverageLine(q, " · ", HtmlReport::esc))
+        .append("</p>\n");
     if (!q.notCoded().isEmpty()) {
       List<String> names = new ArrayList<>();
       q.notCoded().forEach(w -> names.add(esc(w)));
-      h.append("<p>Not coded yet, so left out: ")
+      h.append("<p>No answer read by a person yet in ")
           .append(String.join(", ", names))
-          .append(".</p>\n");
+          .append(": codes given by hand have no share there.</p>\n");
     }
 
     if (!q.changes().isEmpty()) {
@@ -90,25 +96,60 @@ final class HtmlReport {
       }
       h.append("</ul>\n");
     }
+    if (!q.notCompared().isEmpty()) {
+      h.append("<h3>Not compared</h3>\n<ul class=\"not-compared\">\n");
+      for (NotCompared n : q.notCompared()) {
+        h.append("<li><span class=\"verdict-other\">")
+            .append(esc(n.code()))
+            .append("</span> ")
+            .append(esc(Text.notCompared(n)))
+            .append("</li>\n");
+      }
+      h.append("</ul>\n");
+    }
 
     h.append("<h3>Shares by wave</h3>\n<table>\n<thead><tr><th>Code</th><th>Theme</th>");
     for (String wave : q.bases().keySet()) {
       h.append("<th>").append(esc(wave)).append("</th>");
     }
     h.append("</tr></thead>\n<tbody>\n");
+    shareRows(h, q.codes(), q.bases().keySet(), true);
+    h.append("</tbody>\n</table>\n<div class=\"charts\">\n");
+    List<String> waves = List.copyOf(q.bases().keySet());
     for (CodeFrequency row : q.codes()) {
+      shareChart(h, row, waves);
+    }
+    h.append("</div>\n");
+    segments(h, q);
+
+    cooccurrence(h, q);
+    saturation(h, q.saturation());
+    h.append("</section>\n");
+  }
+
+  /** The table rows of shares: one per code, one cell per wave (a missing share says why). */
+  private static void shareRows(
+      StringBuilder h, List<CodeFrequency> rows, Collection<String> waves, boolean withTheme) {
+    for (CodeFrequency row : rows) {
       h.append("<tr><td>")
           .append(row.theme() ? "<strong>" + esc(row.code()) + "</strong>" : esc(row.code()))
-          .append("</td><td>")
-          .append(esc(row.parent().orElse("")))
+          .append(row.byRule() ? " <span class=\"flag\">by rule</span>" : "")
           .append("</td>");
-      for (Share s : row.waves().values()) {
+      if (withTheme) {
+        h.append("<td>").append(esc(row.parent().orElse(""))).append("</td>");
+      }
+      for (String wave : waves) {
+        Share s = row.waves().get(wave);
+        if (s == null) {
+          h.append("<td class=\"n muted\">no share<br><span class=\"flag\">")
+              .append(esc(row.noShare().getOrDefault(wave, "")))
+              .append("</span></td>");
+          continue;
+        }
         h.append("<td class=\"n\">")
             .append(esc(Text.share(s)))
             .append("<br><span class=\"muted\">")
-            .append(s.count())
-            .append(" of ")
-            .append(s.base())
+            .append(esc(Text.counts(s)))
             .append("</span>");
         String flags = Text.flags(s);
         if (!flags.isEmpty()) {
@@ -118,19 +159,28 @@ final class HtmlReport {
       }
       h.append("</tr>\n");
     }
-    h.append("</tbody>\n</table>\n<div class=\"charts\">\n");
-    for (CodeFrequency row : q.codes()) {
-      shareChart(h, row);
-    }
-    h.append("</div>\n");
+  }
 
-    cooccurrence(h, q);
-    saturation(h, q.saturation());
-    h.append("</section>\n");
+  /** Shares per segment value: coverage, then one table per value. */
+  private static void segments(StringBuilder h, QuestionFindings q) {
+    for (SegmentFindings seg : q.segments()) {
+      h.append("<h3>").append(esc(seg.segment() + ": " + seg.value())).append("</h3>\n");
+      List<String> parts = new ArrayList<>();
+      seg.coverage().forEach((w, c) -> parts.add(esc(w) + " " + esc(Text.coverage(c))));
+      h.append("<p class=\"coverage\">Read by a person: ")
+          .append(String.join(" · ", parts))
+          .append("</p>\n<table>\n<thead><tr><th>Code</th>");
+      for (String wave : seg.bases().keySet()) {
+        h.append("<th>").append(esc(wave)).append("</th>");
+      }
+      h.append("</tr></thead>\n<tbody>\n");
+      shareRows(h, seg.codes(), seg.bases().keySet(), false);
+      h.append("</tbody>\n</table>\n");
+    }
   }
 
   /** One code's share per wave: a dot for the share and a bar for its interval. */
-  private static void shareChart(StringBuilder h, CodeFrequency row) {
+  private static void shareChart(StringBuilder h, CodeFrequency row, List<String> waves) {
     int width = 220;
     int height = 130;
     int left = 34;
@@ -141,7 +191,7 @@ final class HtmlReport {
       max = Math.max(max, s.ci().upper());
     }
     max = Math.min(1, Math.ceil(max * 10) / 10);
-    int n = row.waves().size();
+    int n = waves.size();
     double plot = height - top - bottom;
     h.append("<svg class=\"chart\" width=\"")
         .append(width)
@@ -161,33 +211,39 @@ final class HtmlReport {
     h.append(text(4, top + 4, Text.percent(max))).append(text(4, y0 + 4, "0%"));
     h.append(line(left, top, width - 6, top, "#e6e8eb"));
     StringBuilder path = new StringBuilder();
-    int i = 0;
-    for (Map.Entry<String, Share> e : row.waves().entrySet()) {
+    int points = 0;
+    for (int i = 0; i < n; i++) {
+      String wave = waves.get(i);
       double x = left + 22 + (n == 1 ? 0 : i * (width - left - 52.0) / (n - 1));
-      Share s = e.getValue();
-      double y = y0 - s.share() / max * plot;
-      double yl = y0 - s.ci().lower() / max * plot;
-      double yu = y0 - s.ci().upper() / max * plot;
-      h.append(line(x, yl, x, yu, s.smallBase() ? "#c9a27a" : "#2f5d62"));
-      h.append(
-              String.format(
-                  Locale.ROOT,
-                  "<circle cx=\"%.1f\" cy=\"%.1f\" r=\"3.5\" fill=\"%s\">",
-                  x,
-                  y,
-                  s.smallBase() ? "#c9a27a" : "#2f5d62"))
-          .append("<title>")
-          .append(esc(e.getKey() + ": " + Text.share(s) + ", " + s.count() + " of " + s.base()))
-          .append("</title></circle>");
       h.append(
               String.format(
                   Locale.ROOT, "<text x=\"%.1f\" y=\"%d\" text-anchor=\"middle\">", x, height - 10))
-          .append(esc(shorten(e.getKey(), 10)))
+          .append(esc(shorten(wave, 10)))
           .append("</text>");
-      path.append(i == 0 ? "M" : "L").append(String.format(Locale.ROOT, "%.1f %.1f ", x, y));
-      i++;
+      Share s = row.waves().get(wave);
+      if (s == null) {
+        continue; // no share: nothing drawn, the table says why
+      }
+      double y = y0 - s.share() / max * plot;
+      double yl = y0 - s.ci().lower() / max * plot;
+      double yu = y0 - s.ci().upper() / max * plot;
+      String colour = s.smallBase() ? "#c9a27a" : "#2f5d62";
+      h.append(line(x, yl, x, yu, colour));
+      h.append(
+              String.format(
+                  Locale.ROOT,
+                  "<circle cx=\"%.1f\" cy=\"%.1f\" r=\"3.5\" fill=\"%s\" stroke=\"%s\">",
+                  x,
+                  y,
+                  s.byRule() ? "#ffffff" : colour,
+                  colour))
+          .append("<title>")
+          .append(esc(wave + ": " + Text.share(s) + ", " + Text.counts(s)))
+          .append("</title></circle>");
+      path.append(points == 0 ? "M" : "L").append(String.format(Locale.ROOT, "%.1f %.1f ", x, y));
+      points++;
     }
-    if (n > 1) {
+    if (points > 1) {
       h.append("<path d=\"")
           .append(path.toString().trim())
           .append("\" fill=\"none\" stroke=\"#2f5d62\" stroke-opacity=\".45\"/>");
@@ -328,20 +384,8 @@ final class HtmlReport {
   }
 
   private static void saturation(StringBuilder h, Saturation s) {
-    h.append("<h3>Saturation</h3>\n<p>")
-        .append(s.coded())
-        .append(" answers coded by a person; ")
-        .append(s.observed())
-        .append(" distinct codes given; Chao1 estimates ")
-        .append(String.format(Locale.ROOT, "%.1f", s.chao1()))
-        .append(" codes (95% interval ")
-        .append(String.format(Locale.ROOT, "%.1f–%.1f", s.ci().lower(), s.ci().upper()))
-        .append("); ")
-        .append(s.newInWindow())
-        .append(" new code(s) in the last ")
-        .append(s.window())
-        .append(" coded answers.</p>\n");
-    if (s.curve().isEmpty()) {
+    h.append("<h3>Saturation</h3>\n<p>").append(esc(Text.saturation(s))).append("</p>\n");
+    if (s.curve().isEmpty() || s.observed() == 0) {
       return;
     }
     int width = 480;
@@ -405,7 +449,7 @@ final class HtmlReport {
                 "<text x=\"%.1f\" y=\"%d\" text-anchor=\"end\">",
                 left + pw,
                 height - 8))
-        .append(esc(String.format(Locale.ROOT, "%.0f answers coded", maxX)))
+        .append(esc(String.format(Locale.ROOT, "%.0f answers read", maxX)))
         .append("</text>")
         .append(
             String.format(Locale.ROOT, "<text x=\"%d\" y=\"%d\">codes</text>", left + 4, top + 10))

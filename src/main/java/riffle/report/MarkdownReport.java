@@ -2,12 +2,12 @@ package riffle.report;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import riffle.model.CodeFrequency;
 import riffle.model.Cooccurrence;
 import riffle.model.Findings;
+import riffle.model.NotCompared;
 import riffle.model.QuestionFindings;
-import riffle.model.Saturation;
+import riffle.model.SegmentFindings;
 import riffle.model.Share;
 import riffle.model.WaveChange;
 
@@ -18,10 +18,10 @@ final class MarkdownReport {
   static String write(Findings findings, String title) {
     StringBuilder m = new StringBuilder(32 * 1024);
     m.append("# ").append(md(title)).append("\n\n");
-    m.append(
-            "Shares are of substantive answers, with 95% Wilson intervals. *Small base*: under 30 ")
-        .append("answers; *imprecise*: interval wider than 20 points (common practice, after the ")
-        .append("NCHS 2017 standards for proportions).\n");
+    m.append("Shares are of the substantive answers a person has read, with 95% Wilson intervals; ")
+        .append("a code only rules give is counted over the answers its rules ran on and marked ")
+        .append("*by rule*. *Small base*: under 30 answers; *imprecise*: interval wider than 20 ")
+        .append("points (common practice, after the NCHS 2017 standards for proportions).\n");
     for (QuestionFindings q : findings.questions()) {
       question(m, q);
     }
@@ -30,13 +30,15 @@ final class MarkdownReport {
 
   private static void question(StringBuilder m, QuestionFindings q) {
     m.append("\n## ").append(md(q.question())).append("\n\n");
-    List<String> bases = new ArrayList<>();
-    q.bases().forEach((wave, base) -> bases.add(md(wave) + " " + base));
-    m.append("Bases: ").append(String.join(" · ", bases)).append("\n");
+    m.append("Answers read by a person: ")
+        .append(Text.coverageLine(q, " · ", MarkdownReport::md))
+        .append("\n");
     if (!q.notCoded().isEmpty()) {
       List<String> names = new ArrayList<>();
       q.notCoded().forEach(w -> names.add(md(w)));
-      m.append("\nNot coded yet, so left out: ").append(String.join(", ", names)).append(".\n");
+      m.append("\nNo answer read by a person yet in ")
+          .append(String.join(", ", names))
+          .append(": codes given by hand have no share there.\n");
     }
     if (!q.changes().isEmpty()) {
       m.append("\n### What changed\n\n");
@@ -50,6 +52,16 @@ final class MarkdownReport {
         m.append('\n');
       }
     }
+    if (!q.notCompared().isEmpty()) {
+      m.append("\n### Not compared\n\n");
+      for (NotCompared n : q.notCompared()) {
+        m.append("- ")
+            .append(md(n.code()))
+            .append(", ")
+            .append(md(Text.notCompared(n)))
+            .append('\n');
+      }
+    }
     m.append("\n### Shares by wave\n\n| Code | Theme |");
     for (String wave : q.bases().keySet()) {
       m.append(' ').append(md(wave)).append(" |");
@@ -59,16 +71,17 @@ final class MarkdownReport {
     for (CodeFrequency row : q.codes()) {
       m.append("| ")
           .append(row.theme() ? "**" + md(row.code()) + "**" : md(row.code()))
+          .append(row.byRule() ? " *(by rule)*" : "")
           .append(" | ")
           .append(md(row.parent().orElse("")))
           .append(" |");
-      for (Share s : row.waves().values()) {
-        m.append(' ')
-            .append(md(Text.share(s)))
-            .append(", ")
-            .append(s.count())
-            .append('/')
-            .append(s.base());
+      for (String wave : q.bases().keySet()) {
+        Share s = row.waves().get(wave);
+        if (s == null) {
+          m.append(" no share: ").append(md(row.noShare().getOrDefault(wave, ""))).append(" |");
+          continue;
+        }
+        m.append(' ').append(md(Text.share(s))).append(", ").append(md(Text.counts(s)));
         String flags = Text.flags(s);
         if (!flags.isEmpty()) {
           m.append(" *").append(flags).append('*');
@@ -77,6 +90,7 @@ final class MarkdownReport {
       }
       m.append('\n');
     }
+    segments(m, q);
     List<Cooccurrence> top =
         q.cooccurrence().stream()
             .filter(c -> c.count() > 0)
@@ -105,20 +119,36 @@ final class MarkdownReport {
             .append(" |\n");
       }
     }
-    Saturation s = q.saturation();
-    m.append("\n### Saturation\n\n")
-        .append(
-            String.format(
-                Locale.ROOT,
-                "%d answers coded by a person; %d distinct codes given; Chao1 estimates %.1f codes"
-                    + " (95%% interval %.1f–%.1f); %d new code(s) in the last %d coded answers.\n",
-                s.coded(),
-                s.observed(),
-                s.chao1(),
-                s.ci().lower(),
-                s.ci().upper(),
-                s.newInWindow(),
-                s.window()));
+    m.append("\n### Saturation\n\n").append(md(Text.saturation(q.saturation()))).append('\n');
+  }
+
+  /** Shares per segment value, one table per value. */
+  private static void segments(StringBuilder m, QuestionFindings q) {
+    for (SegmentFindings seg : q.segments()) {
+      m.append("\n### ")
+          .append(md(seg.segment()))
+          .append(": ")
+          .append(md(seg.value()))
+          .append("\n\nRead by a person: ");
+      List<String> parts = new ArrayList<>();
+      seg.coverage().forEach((w, c) -> parts.add(md(w) + " " + Text.coverage(c)));
+      m.append(String.join(" · ", parts)).append("\n\n| Code |");
+      for (String wave : seg.bases().keySet()) {
+        m.append(' ').append(md(wave)).append(" |");
+      }
+      m.append("\n|---|").append("---:|".repeat(seg.bases().size())).append('\n');
+      for (CodeFrequency row : seg.codes()) {
+        m.append("| ").append(md(row.code())).append(" |");
+        for (String wave : seg.bases().keySet()) {
+          Share s = row.waves().get(wave);
+          m.append(' ')
+              .append(s == null ? "no share" : md(Text.share(s)) + ", " + md(Text.counts(s)))
+              .append(s != null && !Text.flags(s).isEmpty() ? " *" + Text.flags(s) + "*" : "")
+              .append(" |");
+        }
+        m.append('\n');
+      }
+    }
   }
 
   /** Escapes Markdown and HTML syntax so that project text shows as written, on one line. */

@@ -5,7 +5,10 @@ import java.util.List;
 import java.util.Locale;
 import riffle.model.CodeFrequency;
 import riffle.model.ConfidenceInterval;
+import riffle.model.Coverage;
+import riffle.model.NotCompared;
 import riffle.model.QuestionFindings;
+import riffle.model.Saturation;
 import riffle.model.Share;
 import riffle.model.WaveChange;
 
@@ -47,9 +50,68 @@ final class Text {
     return s.smallBase() ? "small base" : s.imprecise() ? "imprecise" : "";
   }
 
-  /** The share in a wave as "30% (25–35%)". */
+  /** The share in a wave as "30% (25–35%)", and "by rule" when rules gave it. */
   static String share(Share s) {
-    return percent(s.share()) + " (" + range(s.ci()) + ")";
+    return percent(s.share()) + " (" + range(s.ci()) + ")" + (s.byRule() ? " by rule" : "");
+  }
+
+  /** A share's count and base: "12 of 112 read", or "12 of 580 by rule". */
+  static String counts(Share s) {
+    return s.count() + " of " + s.base() + (s.byRule() ? " by rule" : " read");
+  }
+
+  /** How much of a wave a person read: "read 112 of 580 (19%)". */
+  static String coverage(Coverage c) {
+    String pct = c.read() > 0 && c.share() < 0.005 ? "<1%" : percent(c.share());
+    return "read " + c.read() + " of " + c.answers() + " (" + pct + ")";
+  }
+
+  /** Coverage per wave on one line: "Spring read 112 of 580 (19%) · Summer read 0 of 600 (0%)". */
+  static String coverageLine(QuestionFindings q, String join, Escape esc) {
+    List<String> parts = new java.util.ArrayList<>();
+    int nonAnswers = 0;
+    for (var e : q.coverage().entrySet()) {
+      parts.add(esc.apply(e.getKey()) + " " + coverage(e.getValue()));
+      nonAnswers += e.getValue().nonAnswers();
+    }
+    String line = String.join(join, parts);
+    if (nonAnswers > 0) {
+      line +=
+          " (" + nonAnswers + " non-answer" + (nonAnswers == 1 ? "" : "s") + " counted nowhere)";
+    }
+    return line;
+  }
+
+  /** Escapes project text for one output format. */
+  @FunctionalInterface
+  interface Escape {
+    String apply(String text);
+  }
+
+  /** Why a code has no verdict between two waves: "Unsure it fits, Wave 1 → Wave 2: …". */
+  static String notCompared(NotCompared n) {
+    return n.from() + " → " + n.to() + ": " + n.reason();
+  }
+
+  /** The saturation in one sentence, or what is missing for one. */
+  static String saturation(Saturation s) {
+    if (s.coded() == 0) {
+      return "No answer read by a person yet.";
+    }
+    if (s.observed() == 0) {
+      return s.coded() + " answers read by a person; no code given to them yet.";
+    }
+    return String.format(
+        Locale.ROOT,
+        "%d answers read by a person; %d distinct codes given; Chao1 estimates %.1f codes"
+            + " (95%% interval %.1f–%.1f); %d new code(s) in the last %d answers read.",
+        s.coded(),
+        s.observed(),
+        s.chao1(),
+        s.ci().lower(),
+        s.ci().upper(),
+        s.newInWindow(),
+        Math.min(s.window(), s.coded()));
   }
 
   /** The sentence an analyst reads first: the verdict, then the numbers behind it. */
@@ -64,7 +126,8 @@ final class Text {
           case WaveChange.NO_CLEAR_CHANGE -> "shows no clear change";
           default -> "has too few answers to tell";
         };
-    return what
+    return (c.byRule() ? "(by rule) " : "")
+        + what
         + " from "
         + c.from()
         + " to "
@@ -81,6 +144,7 @@ final class Text {
         + from.base()
         + " and "
         + to.base()
+        + (c.byRule() ? " answers its rules ran on" : " answers read")
         + ")";
   }
 

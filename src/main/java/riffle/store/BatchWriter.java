@@ -49,6 +49,7 @@ final class BatchWriter {
     int answersAdded = 0;
     int duplicateRows = 0;
     int assignmentsAdded = 0;
+    int readWithoutCode = 0;
     List<InputProblem> problems = new ArrayList<>();
     List<BatchOutcome.Added> added = new ArrayList<>();
     try (PreparedStatement newRespondent =
@@ -77,7 +78,10 @@ final class BatchWriter {
         PreparedStatement assign =
             c.prepareStatement(
                 "INSERT OR IGNORE INTO assignment (answer_id, code_id, coder, origin, created_at)"
-                    + " VALUES (?, ?, ?, 'imported', ?)")) {
+                    + " VALUES (?, ?, ?, 'imported', ?)");
+        PreparedStatement readMark =
+            c.prepareStatement(
+                "INSERT OR IGNORE INTO answer_read (answer_id, coder, created_at) VALUES (?, ?, ?)")) {
       int total = batch.respondents().size();
       int done = 0;
       for (NewRespondent r : batch.respondents()) {
@@ -138,6 +142,13 @@ final class BatchWriter {
               assign.setString(4, now);
               assignmentsAdded += assign.executeUpdate();
             }
+            if (a.codedElsewhere() && a.codes().isEmpty()) {
+              // Coded elsewhere with no code applying: read all the same.
+              readMark.setLong(1, answerId);
+              readMark.setString(2, a.coder());
+              readMark.setString(3, now);
+              readWithoutCode += readMark.executeUpdate();
+            }
             continue;
           }
           oldAnswer.setLong(1, respondentId);
@@ -188,6 +199,7 @@ final class BatchWriter {
     detail.put("skipped", batch.skipped());
     detail.put("codes_created", codesCreated);
     detail.put("assignments", assignmentsAdded);
+    detail.put("read_without_code", readWithoutCode);
     Audit.record(c, batch.actor(), "import", detail);
     return new BatchOutcome(
         respondentsAdded,

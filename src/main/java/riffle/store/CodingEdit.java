@@ -97,6 +97,12 @@ public final class CodingEdit {
     return read(() -> CodingRows.vetoes(c, codeId));
   }
 
+  /** Whether a person marked the answer as read with no (further) code applying. */
+  public boolean markedRead(long answerId) throws ProjectFileException {
+    return read(
+        () -> RowImages.read(c, Table.READ, RowImages.key(Table.READ, answerId)).isPresent());
+  }
+
   /** Every saved rule. */
   public List<Rule> rules() throws ProjectFileException {
     return read(() -> CodingRows.rules(c));
@@ -233,6 +239,32 @@ public final class CodingEdit {
   public void removeVeto(long answerId, long codeId) throws ProjectFileException {
     Map<String, Object> key = RowImages.key(Table.VETO, answerId, codeId);
     write(() -> step(Table.VETO, key, RowImages.read(c, Table.VETO, key), Optional.empty(), null));
+  }
+
+  /**
+   * Marks the answer as read by this edit's coder, with no (further) code applying; nothing happens
+   * when it is marked already.
+   */
+  public void putRead(long answerId) throws ProjectFileException {
+    Map<String, Object> key = RowImages.key(Table.READ, answerId);
+    write(
+        () -> {
+          Optional<Map<String, Object>> before = RowImages.read(c, Table.READ, key);
+          if (before.isEmpty()) {
+            Map<String, Object> image = new LinkedHashMap<>();
+            image.put("coder", coder);
+            image.put("created_at", at.toString());
+            step(Table.READ, key, before, Optional.of(image), answerId);
+          }
+        });
+  }
+
+  /** Takes the "read, no code applies" mark off an answer (its codes, if any, still count). */
+  public void removeRead(long answerId) throws ProjectFileException {
+    Map<String, Object> key = RowImages.key(Table.READ, answerId);
+    write(
+        () ->
+            step(Table.READ, key, RowImages.read(c, Table.READ, key), Optional.empty(), answerId));
   }
 
   /** Saves a rule (new, or with the same id). */

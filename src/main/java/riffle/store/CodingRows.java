@@ -14,6 +14,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalLong;
+import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.Code;
 import riffle.model.Direction;
@@ -165,6 +166,97 @@ final class CodingRows {
       }
     }
     return out;
+  }
+
+  /**
+   * Who read each answer and when first, from the three marks of a person's reading: a code a
+   * person gave (by hand, imported, or an accepted suggestion), a code a person took off, and the
+   * "read, no code applies" mark. Rule-made codes are no mark. Only read answers are in the map.
+   *
+   * @param ids the answers to look at, or null for every answer of the project
+   */
+  static Map<Long, AnswerRead> reads(Connection c, Collection<Long> ids) throws SQLException {
+    String marks =
+        "SELECT answer_id, coder, created_at, 0 AS marked FROM assignment"
+            + " WHERE origin IN ('manual', 'imported', 'suggestion')"
+            + " UNION ALL SELECT answer_id, coder, created_at, 0 FROM assignment_veto"
+            + " UNION ALL SELECT answer_id, coder, created_at, 1 FROM answer_read";
+    Map<Long, List<Object[]>> rows = new HashMap<>();
+    List<List<Long>> parts = new ArrayList<>();
+    if (ids == null) {
+      parts.add(null);
+    } else {
+      List<Long> all = new ArrayList<>(ids);
+      for (int from = 0; from < all.size(); from += 500) {
+        parts.add(all.subList(from, Math.min(all.size(), from + 500)));
+      }
+    }
+    for (List<Long> part : parts) {
+      String where =
+          part == null
+              ? ""
+              : " WHERE answer_id IN ("
+                  + String.join(",", java.util.Collections.nCopies(part.size(), "?"))
+                  + ")";
+      try (PreparedStatement ps =
+          c.prepareStatement(
+              "SELECT answer_id, coder, created_at, marked FROM (" + marks + ")" + where)) {
+        if (part != null) {
+          for (int i = 0; i < part.size(); i++) {
+            ps.setLong(i + 1, part.get(i));
+          }
+        }
+        try (ResultSet rs = ps.executeQuery()) {
+          while (rs.next()) {
+            rows.computeIfAbsent(rs.getLong(1), k -> new ArrayList<>())
+                .add(new Object[] {rs.getString(2), Instant.parse(rs.getString(3)), rs.getInt(4)});
+          }
+        }
+      }
+    }
+    Map<Long, AnswerRead> out = new HashMap<>();
+    for (Map.Entry<Long, List<Object[]>> e : rows.entrySet()) {
+      Map<String, Instant> firstBy = new HashMap<>();
+      boolean marked = false;
+      Instant last = Instant.MIN;
+      for (Object[] r : e.getValue()) {
+        Instant at = (Instant) r[1];
+        firstBy.merge((String) r[0], at, (x, y) -> x.isBefore(y) ? x : y);
+        marked |= (Integer) r[2] == 1;
+        last = at.isAfter(last) ? at : last;
+      }
+      List<String> readers = new ArrayList<>(firstBy.keySet());
+      readers.sort(
+          java.util.Comparator.comparing((String who) -> firstBy.get(who))
+              .thenComparing(who -> who));
+      out.put(
+          e.getKey(),
+          new AnswerRead(e.getKey(), readers, firstBy.get(readers.get(0)), last, marked));
+    }
+    return out;
+  }
+
+  /** The ids of every read answer, ascending (no instant is parsed: for counting). */
+  static long[] readIds(Connection c) throws SQLException {
+    return longs(c, READ_IDS + " ORDER BY 1");
+  }
+
+  /** The ids of the read answers, as a subquery: the three marks of {@link #reads}. */
+  static final String READ_IDS =
+      "SELECT answer_id FROM assignment WHERE origin IN ('manual', 'imported', 'suggestion')"
+          + " UNION SELECT answer_id FROM assignment_veto"
+          + " UNION SELECT answer_id FROM answer_read";
+
+  /** The ids a query returns, in its order. */
+  static long[] longs(Connection c, String sql) throws SQLException {
+    List<Long> out = new ArrayList<>();
+    try (Statement s = c.createStatement();
+        ResultSet rs = s.executeQuery(sql)) {
+      while (rs.next()) {
+        out.add(rs.getLong(1));
+      }
+    }
+    return out.stream().mapToLong(Long::longValue).toArray();
   }
 
   /** The example answers of a code. */

@@ -24,6 +24,7 @@ final class Migrations {
           "V2__analysis.sql",
           "V3__coding.sql",
           "V4__board.sql",
+          "V5__review.sql",
           "V6__queue.sql");
 
   private Migrations() {}

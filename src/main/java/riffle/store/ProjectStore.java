@@ -20,6 +20,7 @@ import java.util.Set;
 import org.sqlite.SQLiteErrorCode;
 import org.sqlite.SQLiteException;
 import riffle.model.Analysis;
+import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.BatchOutcome;
 import riffle.model.Code;
@@ -484,6 +485,27 @@ public final class ProjectStore implements AutoCloseable {
     return read(CodingRows::rules);
   }
 
+  /** Every read answer of the project, by answer id (unread answers are not in the map). */
+  public Map<Long, AnswerRead> reads() throws ProjectFileException {
+    return read(c -> CodingRows.reads(c, null));
+  }
+
+  /** The ids of every read answer, ascending (cheaper than {@link #reads()} for counting). */
+  public long[] readAnswerIds() throws ProjectFileException {
+    return read(CodingRows::readIds);
+  }
+
+  /** The ids of every non-answer ("n/a", "-" …), ascending. */
+  public long[] nonAnswerIds() throws ProjectFileException {
+    return read(
+        c -> CodingRows.longs(c, "SELECT id FROM answer WHERE substantive = 0 ORDER BY id"));
+  }
+
+  /** The read answers among the given ones, by answer id (unread answers are not in the map). */
+  public Map<Long, AnswerRead> reads(Collection<Long> answerIds) throws ProjectFileException {
+    return read(c -> CodingRows.reads(c, answerIds));
+  }
+
   /** The newest audit-log rows, newest first. */
   public List<HistoryEntry> history(int limit) throws ProjectFileException {
     return read(c -> Audit.newest(c, limit));
@@ -552,9 +574,8 @@ public final class ProjectStore implements AutoCloseable {
   }
 
   /**
-   * The answers of a wave and question that a person has read — for now: an assignment made by
-   * hand, imported or accepted from a suggestion, or a code taken off by a person (rule assignments
-   * do not count). The one source of "read" for review queues.
+   * The answers of a wave and question that a person has read, by the marks of {@link #reads()}
+   * (rule assignments do not count).
    */
   public Set<Long> readAnswers(String wave, String question) throws ProjectFileException {
     return read(c -> QueueRows.read(c, wave, question));

@@ -138,9 +138,8 @@ final class QueueRows {
   }
 
   /**
-   * The answers of a wave and question that a person has read: those with an assignment made by
-   * hand, imported or accepted from a suggestion, and those a person took a code off. Assignments
-   * made by rule do not count.
+   * The answers of a wave and question that a person has read: those with a mark of {@link
+   * CodingRows#reads} (a code a person gave or took off, or the "read, no code applies" mark).
    */
   static Set<Long> read(Connection c, String wave, String question) throws SQLException {
     Set<Long> out = new LinkedHashSet<>();
@@ -148,10 +147,9 @@ final class QueueRows {
         c.prepareStatement(
             "SELECT a.id"
                 + ANSWERS_OF
-                + " AND (EXISTS (SELECT 1 FROM assignment s WHERE s.answer_id = a.id"
-                + " AND s.origin IN ('manual', 'imported', 'suggestion'))"
-                + " OR EXISTS (SELECT 1 FROM assignment_veto v WHERE v.answer_id = a.id))"
-                + " ORDER BY a.id")) {
+                + " AND a.id IN ("
+                + CodingRows.READ_IDS
+                + ") ORDER BY a.id")) {
       ps.setString(1, wave);
       ps.setString(2, question);
       try (ResultSet rs = ps.executeQuery()) {

@@ -29,6 +29,7 @@ final class RowImages {
         List.of("answer_id", "code_id"),
         List.of("span_start", "span_end", "coder", "origin", "created_at")),
     VETO("assignment_veto", List.of("answer_id", "code_id"), List.of("coder", "created_at")),
+    READ("answer_read", List.of("answer_id"), List.of("coder", "created_at")),
     CODE(
         "code",
         List.of("id"),

@@ -60,6 +60,8 @@ final class CodingRoutes {
     cfg.routes.post("/api/assignments", this::assign);
     cfg.routes.post("/api/assignments/remove", this::unassign);
     cfg.routes.post("/api/assignments/accept", this::accept);
+    cfg.routes.post("/api/answers/read", this::markRead);
+    cfg.routes.post("/api/answers/read/remove", this::unmarkRead);
     cfg.routes.post("/api/assignments/bulk/preview", this::bulkPreview);
     cfg.routes.post("/api/assignments/bulk", this::bulk);
     cfg.routes.post("/api/undo", this::undo);
@@ -317,7 +319,22 @@ final class CodingRoutes {
 
   void assignments(Context ctx) throws Exception {
     List<Long> ids = ids(ctx);
-    ctx.json(access.call(p -> Map.of("assignments", p.coding().assignments(ids))));
+    ctx.json(
+        access.call(
+            p -> {
+              Map<String, Object> out = new LinkedHashMap<>();
+              out.put("assignments", p.coding().assignments(ids));
+              var reads = p.coding().reads(ids);
+              out.put("read", reads.keySet().stream().sorted().toList());
+              out.put(
+                  "marked",
+                  reads.values().stream()
+                      .filter(r -> r.marked())
+                      .map(r -> r.answerId())
+                      .sorted()
+                      .toList());
+              return out;
+            }));
   }
 
   void assign(Context ctx) throws Exception {
@@ -353,6 +370,22 @@ final class CodingRoutes {
     long answer = required(body.answer(), "answer");
     long code = required(body.code(), "code");
     change(ctx, answer, p -> p.coding().accept(coder, answer, known(p, code)));
+  }
+
+  /** Marks an answer as read with no (other) code applying. */
+  void markRead(Context ctx) throws Exception {
+    AssignBody body = Json.body(ctx, AssignBody.class);
+    String coder = coder(body.coder());
+    long answer = required(body.answer(), "answer");
+    change(ctx, answer, p -> p.coding().markRead(coder, answer));
+  }
+
+  /** Takes the "read, no code applies" mark off an answer. */
+  void unmarkRead(Context ctx) throws Exception {
+    AssignBody body = Json.body(ctx, AssignBody.class);
+    String coder = coder(body.coder());
+    long answer = required(body.answer(), "answer");
+    change(ctx, answer, p -> p.coding().unmarkRead(coder, answer));
   }
 
   void bulkPreview(Context ctx) throws Exception {
@@ -503,6 +536,9 @@ final class CodingRoutes {
               out.put(
                   "assignments",
                   p.coding().assignments(List.of(answer)).getOrDefault(answer, List.of()));
+              var read = p.coding().reads(List.of(answer)).get(answer);
+              out.put("read", read != null);
+              out.put("marked", read != null && read.marked());
               return out;
             }));
   }

@@ -118,13 +118,43 @@ class CodingCommandsTest {
             .json();
     assertEquals(2, preview.get("would_code").asInt(), preview.toString());
     ok("rules", "add", "--project", project, "Price", "--query", "price OR steep");
-    ok("rules", "apply", "--project", project);
+    String applied = ok("rules", "apply", "--project", project).out();
+    assertTrue(applied.contains("2 answer(s) coded, 2 code(s) given"), applied);
     assertEquals(2, codeNamed("Price").get("answers").asInt());
     long steep = firstAnswer("steep");
     ok("code", "--project", project, "--answer", Long.toString(steep), "--remove", "Price");
     String again = ok("rules", "apply", "--project", project).out();
-    assertTrue(again.contains("0 answer(s) coded, 1 left alone"), again);
+    assertTrue(again.contains("0 answer(s) coded, 0 code(s) given; 1 left alone"), again);
     assertEquals(1, codeNamed("Price").get("answers").asInt());
+  }
+
+  int readInQuestionTwo() throws Exception {
+    return ok("report", "--project", project, "--question", "2", "--json")
+        .json()
+        .get("questions")
+        .get(0)
+        .get("coverage")
+        .get("Wave 1")
+        .get("read")
+        .asInt();
+  }
+
+  @Test
+  void anAnswerIsMarkedReadWithNoCodeAndTheMarkIsTakenBack() throws Exception {
+    assertEquals(0, readInQuestionTwo(), "no codes column for this question: nothing read");
+    String answer = Long.toString(firstAnswer("grinders"));
+    String marked =
+        ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana").out();
+    assertTrue(marked.contains("as read: no other code applies"), marked);
+    assertEquals(1, readInQuestionTwo());
+    ok("undo", "--project", project, "--coder", "ana");
+    assertEquals(0, readInQuestionTwo(), "undone");
+    ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana");
+    ok("code", "--project", project, "--answer", answer, "--none-off", "--coder", "eli");
+    assertEquals(0, readInQuestionTwo(), "the mark taken off");
+    CliTest.Run both =
+        CliTest.riffle("code", "--project", project, "--answer", answer, "--none", "--add", "X");
+    assertEquals(2, both.code(), "one change at a time");
   }
 
   @Test

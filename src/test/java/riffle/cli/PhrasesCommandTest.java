@@ -66,6 +66,24 @@ class PhrasesCommandTest {
       }
     }
     assertTrue(fell, "a delivery-date phrase falls in Wave 3: " + keyness);
+    for (JsonNode k : keyness) {
+      boolean clear = k.get("p_adjusted").asDouble() < 0.05;
+      assertEquals(
+          clear, !k.get("verdict").asText().equals("no clear change"), "a direction is earned");
+    }
+    CliTest.Run text =
+        CliTest.riffle(
+            "phrases",
+            "--project",
+            project,
+            "--question",
+            "1",
+            "--wave",
+            "Wave 3",
+            "--against",
+            "Wave 2");
+    assertTrue(text.out().contains("adjusted p="), text.out());
+    assertTrue(text.out().contains("only where the adjusted p is under 0.05"), text.out());
   }
 
   @Test

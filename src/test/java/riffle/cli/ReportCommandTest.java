@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import riffle.app.HandThenRule;
 
 /** {@code riffle report} and {@code riffle export} on a small coded project. */
 class ReportCommandTest {
@@ -110,5 +111,55 @@ class ReportCommandTest {
               .code());
       assertTrue(Files.readString(out, StandardCharsets.UTF_8).contains("warranty doubts"));
     }
+  }
+
+  @Test
+  void aWaveOnlyRulesTouchedGetsNoVerdictForHandCodesAndTheTextSaysWhy() throws Exception {
+    Path file = HandThenRule.build(dir);
+    CliTest.Run run = CliTest.riffle("report", "--project", file.toString(), "--segment", "device");
+    assertEquals(0, run.code(), run.err());
+    String out = run.out();
+    assertTrue(
+        out.contains("Answers read by a person: Wave 1 read 80 of 80 (100%); Wave 2 read 0 of 80"),
+        out);
+    assertTrue(out.contains("Wave 2 no share (no answer of Wave 2 read by a person yet)"), out);
+    assertTrue(out.contains("Price (by rule)"), out);
+    for (String line : out.lines().toList()) {
+      if (line.contains(HandThenRule.UNSURE) || line.contains(HandThenRule.DELIVERY)) {
+        assertFalse(line.contains(" fell ") || line.contains(" rose "), line);
+      }
+    }
+    assertTrue(out.contains("  Not compared"), out);
+    // The segment split is in the text too, values told apart only by case merged.
+    assertTrue(out.contains("device = Mobile: read by a person Wave 1 read"), out);
+    assertTrue(out.contains("device = (no value)"), out);
+    assertFalse(out.contains("device = mobile"), out);
+    assertTrue(out.contains("Saturation: 2 codes in 80 answers read by a person"), out);
+
+    JsonNode q =
+        CliTest.riffle("report", "--project", file.toString(), "--json")
+            .json()
+            .get("questions")
+            .get(0);
+    assertEquals(80, q.get("bases").get("Wave 1").asInt(), "the existing keys stay");
+    assertEquals(0, q.get("coverage").get("Wave 2").get("read").asInt());
+    assertEquals(80, q.get("coverage").get("Wave 2").get("answers").asInt());
+    assertEquals("Wave 2", q.get("not_coded").get(0).asText());
+    JsonNode unsure = q.get("codes").get(0);
+    assertEquals(HandThenRule.UNSURE, unsure.get("code").asText());
+    assertFalse(unsure.get("waves").has("Wave 2"));
+    assertTrue(unsure.get("no_share").get("Wave 2").asText().contains("read by a person"));
+    assertTrue(q.get("codes").get(2).get("by_rule").asBoolean());
+    assertTrue(q.get("codes").get(2).get("waves").get("Wave 2").get("by_rule").asBoolean());
+    assertEquals(2, q.get("not_compared").size());
+    assertTrue(q.get("changes").get(0).get("by_rule").asBoolean());
+  }
+
+  @Test
+  void anEmptyProjectsSaturationSaysNobodyReadAnything() {
+    CliTest.Run text = CliTest.riffle("report", "--project", project, "--question", "2");
+    assertEquals(0, text.code(), text.err());
+    assertTrue(text.out().contains("Saturation: no answer read by a person yet"), text.out());
+    assertFalse(text.out().contains("Chao1 0.0"), text.out());
   }
 }

@@ -9,6 +9,7 @@ import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import riffle.model.KeyPhrase;
+import riffle.model.WaveChange;
 import riffle.stats.ChiSquare;
 import riffle.stats.Keyness;
 import riffle.stats.LogLikelihood;
@@ -74,6 +75,24 @@ class KeynessPhrasesTest {
     assertEquals("more", reverse.direction());
     assertEquals(delivery.logLikelihood(), reverse.logLikelihood(), 1e-12);
     assertEquals(-delivery.logRatio(), reverse.logRatio(), 1e-12);
+  }
+
+  @Test
+  void aDirectionIsStatedOnlyWhereTheAdjustedPPassesTheFindingsThreshold() {
+    List<KeyPhrase> key = MINER.keyness(docs, WAVE_3, WAVE_2);
+    boolean someUnclear = false;
+    for (KeyPhrase k : key) {
+      if (k.pAdjusted() < WaveChange.SIGNIFICANCE) {
+        assertEquals(k.direction().equals("more") ? WaveChange.ROSE : WaveChange.FELL, k.verdict());
+      } else {
+        assertEquals(WaveChange.NO_CLEAR_CHANGE, k.verdict(), k.toString());
+        someUnclear = true;
+      }
+    }
+    assertTrue(someUnclear, "most phrases compared do not change clearly: " + key);
+    assertEquals(WaveChange.FELL, KeyPhrase.verdict("less", 0.049));
+    assertEquals(WaveChange.NO_CLEAR_CHANGE, KeyPhrase.verdict("less", 0.05));
+    assertEquals(WaveChange.ROSE, KeyPhrase.verdict("more", 0.001));
   }
 
   @Test

@@ -97,9 +97,30 @@ class ExportsTest {
                 Map.of("country", "@SUM(A1)", "buyer", "new"),
                 List.of(
                     new ExportAssignment("cost", "Mila", "manual", 0, 5),
-                    new ExportAssignment("old", "import", "imported", -1, -1))),
+                    new ExportAssignment("old", "import", "imported", -1, -1)),
+                List.of("Mila", "import")),
             new ExportAnswer(
-                "a2", "r2", "Spring", Survey.MAIN, false, "n/a", Map.of(), List.of())));
+                "a2", "r2", "Spring", Survey.MAIN, false, "n/a", Map.of(), List.of(), List.of()),
+            new ExportAnswer(
+                "a3",
+                "r3",
+                "Spring",
+                Survey.MAIN,
+                true,
+                "All fine",
+                Map.of(),
+                List.of(),
+                List.of("Mila")),
+            new ExportAnswer(
+                "a4",
+                "r4",
+                "Spring",
+                Survey.MAIN,
+                true,
+                "Shipping was dear",
+                Map.of(),
+                List.of(new ExportAssignment("cost", "Mila", "rule", -1, -1)),
+                List.of())));
   }
 
   @Test
@@ -118,19 +139,25 @@ class ExportsTest {
   }
 
   @Test
-  void wideCsvHasOneZeroOneColumnPerActiveCodeWithThemesCountingTheirCodes() {
+  void wideCsvHasOneColumnPerActiveCodeBlankWhereNobodyReadTheAnswer() {
     String csv = Exports.codedAnswersCsv(export("Too pricey"), false);
-    String[] lines = csv.split("\r\n");
+    String[] lines = csv.split("\r\n", -1);
     assertEquals(
-        "answer_id,respondent,wave,question,substantive,buyer,country,text,Delivery,Delivery cost,"
-            + "Slow delivery,Product quality,Soft fabric,Fits well,Easy checkout,Late newcomer",
+        "answer_id,respondent,wave,question,substantive,read,read_by,buyer,country,text,Delivery,"
+            + "Delivery cost,Slow delivery,Product quality,Soft fabric,Fits well,Easy checkout,"
+            + "Late newcomer",
         lines[0]);
     assertEquals(
-        "a1,r1,Spring,What almost stopped you from buying at Ondalune?,1,new,'@SUM(A1),Too pricey,"
-            + "1,1,0,0,0,0,0,0",
+        "a1,r1,Spring,What almost stopped you from buying at Ondalune?,1,1,Mila; import,new,"
+            + "'@SUM(A1),Too pricey,1,1,0,0,0,0,0,0",
         lines[1]);
+    // Nobody read it: unknown, not absent.
     assertTrue(lines[2].startsWith("a2,r2,Spring,"));
-    assertTrue(lines[2].endsWith(",0,,,n/a,0,0,0,0,0,0,0,0"));
+    assertTrue(lines[2].endsWith(",0,0,,,,n/a,,,,,,,,"), lines[2]);
+    // Read with no code applying: 0 everywhere.
+    assertTrue(lines[3].endsWith(",1,1,Mila,,,All fine,0,0,0,0,0,0,0,0"), lines[3]);
+    // Unread but coded by a rule: 1 where the rule gave it, blank elsewhere.
+    assertTrue(lines[4].endsWith(",1,0,,,,Shipping was dear,1,1,,,,,,"), lines[4]);
   }
 
   @Test
@@ -138,11 +165,18 @@ class ExportsTest {
     String csv = Exports.codedAnswersLongCsv(export("Too pricey"), false);
     String[] lines = csv.split("\r\n");
     assertEquals(
-        "answer_id,respondent,wave,question,code_id,code,archived,coder,origin,span_start,span_end,passage",
+        "answer_id,respondent,wave,question,read,read_by,code_id,code,archived,coder,origin,"
+            + "span_start,span_end,passage",
         lines[0]);
-    assertTrue(lines[1].endsWith(",cost,Delivery cost,0,Mila,manual,0,5,Too p"), lines[1]);
+    assertTrue(
+        lines[1].endsWith(",1,Mila; import,cost,Delivery cost,0,Mila,manual,0,5,Too p"), lines[1]);
     assertTrue(lines[2].endsWith(",old,Old delivery code,1,import,imported,,,"), lines[2]);
-    assertEquals(3, lines.length);
+    // The read answer without a code has its row, with the code's columns empty; the unread
+    // non-answer without codes has none.
+    assertTrue(lines[3].startsWith("a3,r3,Spring,"), lines[3]);
+    assertTrue(lines[3].endsWith(",1,Mila,,,,,,,,"), lines[3]);
+    assertTrue(lines[4].endsWith(",0,,cost,Delivery cost,0,Mila,rule,,,"), lines[4]);
+    assertEquals(5, lines.length);
   }
 
   @Test
@@ -176,7 +210,8 @@ class ExportsTest {
                     true,
                     "x",
                     Map.of(),
-                    List.of(new ExportAssignment("ghost", "Mila", "manual", -1, -1)))));
+                    List.of(new ExportAssignment("ghost", "Mila", "manual", -1, -1)),
+                    List.of("Mila"))));
     assertThrows(IllegalArgumentException.class, () -> Exports.codedAnswersCsv(bad, false));
     assertThrows(IllegalArgumentException.class, () -> Exports.codedAnswersLongCsv(bad, false));
     assertThrows(

@@ -22,6 +22,7 @@ import java.util.concurrent.Future;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import riffle.model.Analysis;
+import riffle.model.AnswerRead;
 import riffle.model.BatchOutcome;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
@@ -300,5 +301,80 @@ class ProjectStoreTest {
         List.of("CREATE TABLE a (x INTEGER)", "CREATE INDEX i ON a(x)"),
         Migrations.statements(
             "-- one; two\nCREATE TABLE a (x INTEGER); -- a; b\n" + "CREATE INDEX i ON a(x);\n"));
+  }
+
+  @Test
+  void aSchemaFourProjectGainsTheReadMarkAndKeepsItsCoding() throws Exception {
+    Path file = dir.resolve("old.riffle");
+    try (ProjectStore store = ProjectStore.openOrCreate(file)) {
+      store.store(batch("Wave 1", 0, 6, ""), Progress.NONE);
+    }
+    try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
+        Statement s = c.createStatement()) {
+      s.executeUpdate("DROP TABLE answer_read");
+      s.executeUpdate("DROP INDEX assignment_by_origin");
+      s.executeUpdate("PRAGMA user_version = 4");
+    }
+    try (ProjectStore store = ProjectStore.openExisting(file)) {
+      assertEquals(5, store.schemaVersion());
+      assertEquals("ok", store.integrityCheck());
+      // R0 and R3 carry an imported code: read by the coder of the export.
+      Map<Long, AnswerRead> reads = store.reads();
+      assertEquals(2, reads.size(), reads.toString());
+      reads.values().forEach(r -> assertEquals(List.of("mk"), r.readers()));
+      assertEquals(2, store.readAnswerIds().length);
+    }
+  }
+
+  @Test
+  void answersOfACodedColumnWithoutACodeAreReadToo() throws Exception {
+    Analysis a = plain("x");
+    List<NewRespondent> respondents = new ArrayList<>();
+    for (int i = 0; i < 3; i++) {
+      respondents.add(
+          new NewRespondent(
+              "C" + i,
+              i + 2,
+              "",
+              Map.of(),
+              List.of(
+                  new NewAnswer(
+                      Q1,
+                      "answer " + i,
+                      "answer " + i,
+                      true,
+                      i + 2,
+                      2,
+                      i == 0 ? List.of("Price") : List.of(),
+                      "Ines",
+                      a,
+                      true),
+                  new NewAnswer(
+                      Q2, "other " + i, "other " + i, true, i + 2, 3, List.of(), "", a))));
+    }
+    WaveBatch coded =
+        new WaveBatch(
+            "Coded",
+            LocalDate.of(2026, 3, 1),
+            "c.csv",
+            "00",
+            "UTF-8",
+            "comma",
+            3,
+            0,
+            List.of(Q1, Q2),
+            respondents,
+            "tester",
+            "test");
+    try (ProjectStore store = ProjectStore.openOrCreate(dir.resolve("p.riffle"))) {
+      store.store(coded, Progress.NONE);
+      Map<Long, AnswerRead> reads = store.reads();
+      assertEquals(3, reads.size(), "the coded column's three answers, not the other question's");
+      assertEquals(1, reads.values().stream().filter(r -> !r.marked()).count());
+      reads.values().forEach(r -> assertEquals(List.of("Ines"), r.readers()));
+      assertThrows(
+          IllegalArgumentException.class,
+          () -> new NewAnswer(Q1, "x", "x", true, 1, 1, List.of("Price"), "Ines", a, false));
+    }
   }
 }

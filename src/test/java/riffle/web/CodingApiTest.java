@@ -364,13 +364,52 @@ class CodingApiTest {
   }
 
   @Test
+  void anAnswerIsMarkedReadWithNoCodeAndTheProgressCountsSubstantiveAnswersRead() throws Exception {
+    JsonNode all = get("/api/answers?limit=100").json();
+    assertEquals(12, all.get("total").asInt());
+    assertEquals(11, all.get("substantive").asInt(), "the non-answer is apart");
+    JsonNode page = get("/api/answers?q=break").json();
+    JsonNode entry = page.get("answers").get(0);
+    long answer = entry.get("id").asLong();
+    assertFalse(entry.get("read").asBoolean());
+    assertEquals(0, page.get("read").asInt());
+
+    WebServerTest.Answer marked =
+        post("/api/answers/read", Map.of("coder", "ana", "answer", answer));
+    assertEquals(200, marked.status(), marked.raw().body());
+    assertTrue(marked.json().get("read").asBoolean());
+    assertTrue(marked.json().get("marked").asBoolean());
+    assertTrue(marked.json().get("outcome").get("message").asText().contains("as read"));
+    JsonNode after = get("/api/answers?q=break").json();
+    assertEquals(1, after.get("read").asInt());
+    assertTrue(after.get("answers").get(0).get("marked").asBoolean());
+    assertEquals(
+        0, get("/api/answers?coded=no&q=break").json().get("total").asInt(), "read: not to do");
+    JsonNode state = get("/api/assignments?answers=" + answer).json();
+    assertEquals(answer, state.get("read").get(0).asLong());
+    assertEquals(answer, state.get("marked").get(0).asLong());
+
+    WebServerTest.Answer off =
+        post("/api/answers/read/remove", Map.of("coder", "ana", "answer", answer));
+    assertEquals(200, off.status(), off.raw().body());
+    assertFalse(off.json().get("read").asBoolean());
+    assertEquals(0, get("/api/answers?q=break").json().get("read").asInt());
+    assertEquals(400, post("/api/answers/read", Map.of("answer", answer)).status(), "no coder");
+    assertEquals(400, post("/api/answers/read", Map.of("coder", "ana", "answer", 99_999)).status());
+  }
+
+  @Test
   void findingsAndExportsComeFromTheProject() throws Exception {
     long code = code("Returns unclear", null);
     long answer = get("/api/answers?q=returns").json().get("answers").get(0).get("id").asLong();
     post("/api/assignments", assign(answer, code));
     JsonNode findings = get("/api/findings").json();
     JsonNode q = findings.get("questions").get(0);
-    assertEquals(11, q.get("bases").get("Wave 1").asInt());
+    // The base is the answers a person read (here and in the other tests) of the wave's 11.
+    int read = q.get("coverage").get("Wave 1").get("read").asInt();
+    assertTrue(read >= 1 && read < 11, q.toString());
+    assertEquals(read, q.get("bases").get("Wave 1").asInt());
+    assertEquals(11, q.get("coverage").get("Wave 1").get("answers").asInt());
     assertNotNull(q.get("saturation").get("chao1"));
     boolean found = false;
     for (JsonNode c : q.get("codes")) {
@@ -378,7 +417,7 @@ class CodingApiTest {
         found = true;
         JsonNode share = c.get("waves").get("Wave 1");
         assertEquals(1, share.get("count").asInt());
-        assertTrue(share.get("small_base").asBoolean(), "11 answers is a small base");
+        assertTrue(share.get("small_base").asBoolean(), "a few answers read is a small base");
       }
     }
     assertTrue(found);

@@ -172,7 +172,8 @@ class CodingBrowserTest {
   }
 
   static void showWave(String wave, String state) {
-    new Select(driver.findElement(By.id("coding-wave"))).selectByVisibleText(wave);
+    // The wave list is filled again whenever the project's counts change: pick again if it was.
+    retrying(() -> new Select(driver.findElement(By.id("coding-wave"))).selectByVisibleText(wave));
     new Select(driver.findElement(By.id("coding-state"))).selectByValue(state);
     driver.findElement(By.id("coding-go")).click();
     waiting()
@@ -233,8 +234,9 @@ class CodingBrowserTest {
     // Ten answers coded by keyboard only: a code key, then j.
     open("coding");
     showWave("Wave 5", "");
+    // The saved rule coded two answers of the new wave, but nobody has read any yet.
     assertTrue(
-        driver.findElement(By.id("coding-progress")).getText().startsWith("2 of 12"),
+        driver.findElement(By.id("coding-progress")).getText().startsWith("Read 0 of 12 answers"),
         driver.findElement(By.id("coding-progress")).getText());
     String[] plan = {"d", "c", "p", "p", "d", "c", "c", "p", "d", "c"};
     List<String> texts = new ArrayList<>();
@@ -257,7 +259,7 @@ class CodingBrowserTest {
     }
     saved();
     assertTrue(
-        driver.findElement(By.id("coding-progress")).getText().startsWith("10 of 12"),
+        driver.findElement(By.id("coding-progress")).getText().startsWith("Read 10 of 12"),
         driver.findElement(By.id("coding-progress")).getText());
     shot("coding-focus");
 
@@ -265,7 +267,22 @@ class CodingBrowserTest {
     keys("z");
     waiting().until(d -> chips().isEmpty());
     saved();
-    waiting().until(d -> d.findElement(By.id("coding-progress")).getText().startsWith("9 of 12"));
+    waiting()
+        .until(d -> d.findElement(By.id("coding-progress")).getText().startsWith("Read 9 of 12"));
+
+    // "Read, no code applies" is a key of its own (shown with the keys); again takes it back.
+    assertTrue(text("#coding-keyhelp").contains("read: no (other) code applies"));
+    keys(".");
+    waiting().until(d -> text("#coding-codes").contains("read: no code applies"));
+    waiting().until(d -> text("#coding-progress").startsWith("Read 10 of 12"));
+    assertEquals(
+        "true", driver.findElement(By.id("coding-read-none")).getAttribute("aria-pressed"));
+    saved();
+    shot("coding-read-none");
+    keys(".");
+    waiting().until(d -> text("#coding-progress").startsWith("Read 9 of 12"));
+    waiting().until(d -> text("#coding-codes").contains("no code yet"));
+    saved();
 
     // Words selected in the answer, then a key: the code carries those words.
     keys("k");
@@ -286,8 +303,9 @@ class CodingBrowserTest {
     shot("coding-list");
     driver.findElement(By.id("coding-view-focus")).click();
 
-    // A suggestion, learned from the pilot's human codes, accepted with Enter.
-    showWave("Pilot", "no");
+    // A suggestion, learned from the pilot's human codes, accepted with Enter on an answer of a
+    // wave nobody has read (the pilot was coded in full elsewhere: nothing of it is left to read).
+    showWave("Wave 2", "no");
     WebElement box = null;
     for (int i = 0; i < 30 && box == null; i++) {
       try {
@@ -334,12 +352,12 @@ class CodingBrowserTest {
     }
     assertEquals(texts.subList(0, 9), coded, "the nine answers still coded, the undone one not");
     new Select(driver.findElement(By.id("coding-code"))).selectByVisibleText(suggested);
-    new Select(driver.findElement(By.id("coding-wave"))).selectByVisibleText("Pilot");
+    new Select(driver.findElement(By.id("coding-wave"))).selectByVisibleText("Wave 2");
     driver
         .findElement(By.id("coding-query"))
         .sendKeys("\"" + acceptedText.split("[.,!?]")[0].replace("\"", "") + "\"", Keys.ENTER);
     waiting().until(d -> !d.findElements(By.id("coding-text")).isEmpty());
-    // Several pilot answers may share that wording: step through the matches to the accepted one.
+    // Several answers may share that wording: step through the matches to the accepted one.
     for (int i = 0; i < 40 && !answerText().equals(acceptedText); i++) {
       String before = text("#coding-card-title");
       keys("j");
@@ -354,23 +372,40 @@ class CodingBrowserTest {
     open("findings");
     new Select(driver.findElement(By.id("findings-question"))).selectByValue("1");
     driver.findElement(By.id("findings-go")).click();
-    // Waves 2 and 3 are coded by one rule only, so every code the pilot's people gave falls.
-    waiting().until(d -> text("#findings-q1-verdicts").contains("fell from Pilot to Wave 2"));
-    String words = text("#findings-q1-verdicts");
-    assertTrue(words.contains("\u201cwarranty doubts\u201d fell from Pilot to Wave 2"), words);
-    assertTrue(words.matches("(?s).*points \\(95% interval .* to .*; adjusted p .*"), words);
+    // Waves 2 and 3 are coded by one rule only, and nobody read wave 3 (the coding test may have
+    // read an answer of wave 2): the codes the pilot's people gave have no share there and no
+    // verdict (issue 13), and the coverage says so.
+    waiting().until(d -> text("#findings-q1-coverage").contains("Pilot read"));
+    String coverage = text("#findings-q1-coverage");
+    assertTrue(coverage.matches("(?s).*Pilot read ([\\d,]+) of \\1 \\(100%\\).*"), coverage);
+    assertTrue(coverage.matches("(?s).*Wave 3 read 0 of [\\d,]+ \\(0%\\).*"), coverage);
+    // (Between waves 2 and 3 both shares may be by rule: such a change is told, marked by rule.)
+    for (String claim : List.of(" fell from Pilot", " rose from Pilot")) {
+      assertFalse(text("#screen-findings").contains(claim), "no verdict without a read base");
+    }
+    String why = text("#findings-q1-not-compared");
+    assertTrue(why.contains("no answer of Wave 3 read by a person yet"), why);
+    assertTrue(why.contains("but given by rule in Wave "), why);
+    assertTrue(
+        text("#screen-findings")
+            .contains("no share in Wave 3: no answer of Wave 3 read by a person"));
+    assertFalse(driver.findElements(By.cssSelector(".share-chart svg circle.rule")).isEmpty());
     shot("findings");
     for (String part : List.of(".small-multiples", ".heatmap", "#findings-saturation")) {
       js("document.querySelector(arguments[0]).scrollIntoView({block: 'start'})", part);
       shot("findings-" + part.replaceAll("[^a-z-]", ""));
     }
-    new Select(driver.findElement(By.id("findings-from"))).selectByVisibleText("Wave 2");
+    new Select(driver.findElement(By.id("findings-from"))).selectByVisibleText("Pilot");
     new Select(driver.findElement(By.id("findings-to"))).selectByVisibleText("Wave 3");
     driver.findElement(By.id("findings-go")).click();
-    waiting().until(d -> text("#screen-findings").contains("between Wave 2 and Wave 3"));
+    waiting().until(d -> text("#findings-q1-not-compared").contains("Pilot \u2192 Wave 3"));
     assertTrue(
-        text("#screen-findings")
-            .contains("\u201cwarranty doubts\u201d: no clear change from Wave 2 to Wave 3"));
+        text("#findings-q1-not-compared")
+            .contains(
+                "\u201cwarranty doubts\u201d, Pilot \u2192 Wave 3: read by a person in Pilot but given"
+                    + " by rule in Wave 3"),
+        text("#findings-q1-not-compared"));
+    assertTrue(text("#screen-findings").contains("No comparison can be made yet"));
     assertFalse(driver.findElements(By.cssSelector(".share-chart svg circle")).isEmpty());
     assertFalse(driver.findElements(By.cssSelector(".heatmap svg rect")).isEmpty());
     assertTrue(
