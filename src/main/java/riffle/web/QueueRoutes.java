@@ -58,8 +58,9 @@ final class QueueRoutes {
 
   /**
    * A stretch of the queue's order shaped as the answer list's page ({@code total}, {@code coded} —
-   * here the answers read — {@code offset}, {@code answers}), each answer with its {@code position}
-   * and whether it is {@code read}, plus the queue's {@code status}.
+   * here the answers read —, {@code substantive}, {@code read}, {@code offset}, {@code answers}),
+   * each answer with its {@code position} and whether it is {@code read}, plus the queue's {@code
+   * status}.
    */
   void answers(Context ctx) throws Exception {
     QueueKey key = key(ctx);
@@ -83,6 +84,9 @@ final class QueueRoutes {
     out.put("query", "");
     out.put("total", page.status().sample().answers());
     out.put("coded", page.status().sample().read());
+    // A queue holds substantive answers only: all of them count, and "read" is the sample's.
+    out.put("substantive", page.status().sample().answers());
+    out.put("read", page.status().sample().read());
     out.put("offset", page.offset());
     out.put("answers", answers);
     ctx.json(out);

@@ -52,6 +52,8 @@ class QueueStoreTest {
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file);
         Statement s = c.createStatement()) {
       s.executeUpdate("DROP TABLE review_queue");
+      s.executeUpdate("DROP TABLE answer_read");
+      s.executeUpdate("DROP INDEX assignment_by_origin");
       s.executeUpdate("PRAGMA user_version = 4");
     }
     try (ProjectStore store = ProjectStore.openExisting(file)) {
