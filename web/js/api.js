@@ -10,7 +10,7 @@ export class ApiError extends Error {
 }
 
 /**
- * Calls the API. body: a value sent as JSON, or, with raw: true, bytes sent as they are.
+ * Calls the API. body: a value sent as JSON, or, with raw: true, bytes or a File sent as they are.
  * Resolves to the parsed JSON answer; rejects with ApiError.
  */
 export async function api(path, { method = 'GET', body, raw = false } = {}) {

@@ -1,0 +1,208 @@
+package riffle.web;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.net.Socket;
+import java.net.http.HttpRequest;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Requests a prober sends rather than the page: a body of JSON {@code null} on every changing
+ * route, bodies and uploads over the limits, and requests so malformed that Jetty refuses them
+ * before any route runs. Each is a 4xx in the API's {@code {error, where}} shape, names no
+ * exception class, and leaves the project as it was. A real server on port 0.
+ */
+class HostileRequestsTest {
+  @TempDir static Path dir;
+  static WebServer server;
+
+  /** Every route that takes a JSON body, with a path the route answers. */
+  static final List<String> JSON_ROUTES =
+      List.of(
+          "POST /api/import/preview",
+          "POST /api/imports",
+          "POST /api/codes",
+          "PATCH /api/codes/1",
+          "POST /api/codes/1/archive",
+          "POST /api/codes/1/remove",
+          "POST /api/codes/1/move",
+          "POST /api/codes/1/split",
+          "POST /api/codes/merge",
+          "POST /api/rules",
+          "POST /api/rules/preview",
+          "POST /api/rules/apply",
+          "POST /api/rules/1/remove",
+          "POST /api/assignments",
+          "POST /api/assignments/remove",
+          "POST /api/assignments/accept",
+          "POST /api/assignments/bulk/preview",
+          "POST /api/assignments/bulk",
+          "POST /api/undo",
+          "POST /api/redo",
+          "POST /api/suggestions/accept-above",
+          "POST /api/board/pin",
+          "POST /api/board/unpin",
+          "POST /api/board/move",
+          "POST /api/board/line");
+
+  @BeforeAll
+  static void start() throws Exception {
+    server = WebServer.start(WebServerTest.smallProject(dir), WebServer.Options.defaults());
+  }
+
+  @AfterAll
+  static void stop() {
+    server.close();
+  }
+
+  static JsonNode summary() throws Exception {
+    return WebServerTest.send(HttpRequest.newBuilder(server.url().resolve("/api/project")).GET())
+        .json()
+        .get("summary");
+  }
+
+  static void assertRefusal(int status, JsonNode body, String what) {
+    assertTrue(body != null && body.has("error") && body.has("where"), what + ": " + body);
+    assertFalse(body.get("error").asText().contains("Exception"), what + ": " + body);
+    assertTrue(status >= 400 && status < 500, what + ": " + status + " " + body);
+  }
+
+  @Test
+  void aNullBodyIs400OnEveryRouteThatReadsJson() throws Exception {
+    JsonNode before = summary();
+    for (String route : JSON_ROUTES) {
+      String[] mp = route.split(" ");
+      WebServerTest.Answer a =
+          WebServerTest.send(
+              HttpRequest.newBuilder(server.url().resolve(mp[1]))
+                  .header("Origin", WebServerTest.origin(server))
+                  .header("Content-Type", "application/json")
+                  .method(mp[0], HttpRequest.BodyPublishers.ofString("null")));
+      assertEquals(400, a.status(), route + ": " + a.json());
+      assertRefusal(a.status(), a.json(), route);
+      assertTrue(a.json().get("error").asText().contains("JSON object"), route + ": " + a.json());
+    }
+    assertEquals(before, summary());
+  }
+
+  @Test
+  void aJsonBodyOverItsLimitIs413InTheApisShape() throws Exception {
+    String big = "{\"paste\": \"" + "a".repeat((int) WebServer.MAX_JSON) + "\"}";
+    WebServerTest.Answer a =
+        WebServerTest.send(
+            HttpRequest.newBuilder(server.url().resolve("/api/import/preview"))
+                .header("Origin", WebServerTest.origin(server))
+                .header("Content-Type", "application/json")
+                .POST(HttpRequest.BodyPublishers.ofString(big)));
+    assertEquals(413, a.status());
+    assertRefusal(a.status(), a.json(), "413");
+    assertTrue(a.json().get("error").asText().contains("16 MiB"), a.json().toString());
+  }
+
+  @Test
+  void anUploadDeclaredOverTheLimitIsRefusedUnread() throws Exception {
+    JsonNode before = summary();
+    Raw r =
+        raw(
+            "POST /api/uploads?name=huge.csv HTTP/1.1\r\nHost: "
+                + host()
+                + "\r\nOrigin: "
+                + WebServerTest.origin(server)
+                + "\r\nContent-Length: "
+                + (WebServer.MAX_UPLOAD + 1)
+                + "\r\nConnection: close\r\n\r\n");
+    assertEquals(413, r.status(), r.body());
+    JsonNode json = Json.MAPPER.readTree(r.body());
+    assertRefusal(r.status(), json, "upload");
+    assertTrue(json.get("error").asText().contains("100 MiB"), r.body());
+    assertEquals(before, summary());
+  }
+
+  @Test
+  void jettysOwnRefusalsComeAsJson() throws Exception {
+    Raw badAddress =
+        raw("GET /api/%zz HTTP/1.1\r\nHost: " + host() + "\r\nConnection: close\r\n\r\n");
+    assertEquals(400, badAddress.status(), badAddress.body());
+    assertTrue(badAddress.contentType().startsWith("application/json"), badAddress.head());
+    assertRefusal(400, Json.MAPPER.readTree(badAddress.body()), "bad address");
+
+    Raw bigHeader =
+        raw(
+            "GET /api/project HTTP/1.1\r\nHost: "
+                + host()
+                + "\r\nX-Filler: "
+                + "x".repeat(20_000)
+                + "\r\nConnection: close\r\n\r\n");
+    assertEquals(431, bigHeader.status(), bigHeader.head());
+    assertTrue(bigHeader.contentType().startsWith("application/json"), bigHeader.head());
+    assertRefusal(431, Json.MAPPER.readTree(bigHeader.body()), "big header");
+  }
+
+  @Test
+  void anUnexpectedFailureNamesNoExceptionClass() {
+    Errors.Failure f = Errors.of(new NullPointerException("Cannot invoke \"String.strip()\""));
+    assertEquals(500, f.status());
+    String message = f.body().get("error").toString();
+    assertFalse(message.contains("NullPointerException"), message);
+    assertFalse(message.contains("strip"), message);
+    assertTrue(message.contains("nothing was half-written"), message);
+  }
+
+  private static String host() {
+    return "127.0.0.1:" + server.url().getPort();
+  }
+
+  /**
+   * A response read off a raw socket.
+   *
+   * @param status the status code
+   * @param head the status line and headers
+   * @param body the body
+   */
+  record Raw(int status, String head, String body) {
+    String contentType() {
+      for (String line : head.split("\r\n")) {
+        if (line.toLowerCase(java.util.Locale.ROOT).startsWith("content-type:")) {
+          return line.substring("content-type:".length()).strip();
+        }
+      }
+      return "";
+    }
+  }
+
+  /** Sends bytes the HTTP client would refuse to send, and reads the answer until it closes. */
+  static Raw raw(String request) throws IOException {
+    try (Socket s = new Socket(server.url().getHost(), server.url().getPort())) {
+      s.setSoTimeout(10_000);
+      OutputStream out = s.getOutputStream();
+      out.write(request.getBytes(StandardCharsets.ISO_8859_1));
+      out.flush();
+      ByteArrayOutputStream all = new ByteArrayOutputStream();
+      InputStream in = s.getInputStream();
+      try {
+        in.transferTo(all);
+      } catch (java.net.SocketException e) {
+        // the server may reset after answering; what arrived is the answer
+      }
+      String text = all.toString(StandardCharsets.UTF_8);
+      int split = text.indexOf("\r\n\r\n");
+      String head = split < 0 ? text : text.substring(0, split);
+      String body = split < 0 ? "" : text.substring(split + 4);
+      int status = Integer.parseInt(head.substring(9, 12));
+      return new Raw(status, head, body);
+    }
+  }
+}
