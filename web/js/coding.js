@@ -623,9 +623,12 @@ function answerText(answer, id) {
   return p;
 }
 
+// The answer's wave, question, respondent and segments. Each value from the export sits in its own
+// <bdi>, so a bidirectional override inside one (U+202E …) cannot reorder the rest of the line.
 function meta(answer) {
-  const seg = Object.entries(answer.segments || {}).map(([k, v]) => `${k} ${v}`);
-  return [answer.wave, `Q${answer.question_number}`, `respondent ${answer.respondent}`, ...seg, answer.substantive ? null : 'non-answer'].filter(Boolean).join(' \u00b7 ');
+  const seg = Object.entries(answer.segments || {}).map(([k, v]) => [h('bdi', {}, k), ' ', h('bdi', {}, v)]);
+  const parts = [h('bdi', {}, answer.wave), `Q${answer.question_number}`, ['respondent ', h('bdi', {}, answer.respondent)], ...seg, answer.substantive ? null : 'non-answer'].filter(Boolean);
+  return parts.flatMap((part, i) => (i === 0 ? [part] : [' \u00b7 ', part]));
 }
 
 function focusCard(answer) {
@@ -634,7 +637,7 @@ function focusCard(answer) {
   return h(
     'article',
     { class: 'answer-card', id: 'coding-card', 'data-answer': String(answer.id), 'aria-labelledby': 'coding-card-title' },
-    h('p', { class: 'meta', id: 'coding-card-title' }, `Answer ${count(n)} of ${count(page.total)} \u00b7 ${meta(answer)}`),
+    h('p', { class: 'meta', id: 'coding-card-title' }, `Answer ${count(n)} of ${count(page.total)} \u00b7 `, meta(answer)),
     h('p', { class: 'question' }, answer.question),
     answerText(answer, 'coding-text'),
     chips(answer, 'coding-codes'),
@@ -682,7 +685,7 @@ function listRow(answer, i) {
       'aria-current': i === at ? 'true' : null,
       on: { click: () => { at = i; renderAll(); } },
     },
-    h('p', { class: 'meta' }, `${count(page.offset + i + 1)} \u00b7 ${meta(answer)}`),
+    h('p', { class: 'meta' }, `${count(page.offset + i + 1)} \u00b7 `, meta(answer)),
     h('p', { class: 'answer-text' }, answer.text),
     chips(answer, i === at ? 'coding-codes' : null),
     error ? h('p', { class: 'error', role: 'alert' }, error) : null,

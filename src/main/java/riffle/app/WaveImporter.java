@@ -29,6 +29,7 @@ import riffle.ingest.UnreadableInputException;
 import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.ColumnRole;
+import riffle.model.ControlChars;
 import riffle.model.InputProblem;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
@@ -55,6 +56,14 @@ final class WaveImporter {
     String wave = request.wave().map(String::strip).orElseGet(() -> defaultWave(request));
     if (wave.isEmpty()) {
       throw new IllegalArgumentException("the wave name is empty; give one with --wave NAME");
+    }
+    if (request.wave().isEmpty()) {
+      try {
+        ControlChars.checkName("the wave name", wave);
+      } catch (IllegalArgumentException e) {
+        throw new IllegalArgumentException(
+            e.getMessage() + " (it comes from the file's name; name the wave with --wave NAME)", e);
+      }
     }
     Optional<LocalDate> stored = store.waveDate(wave);
     if (stored.isPresent()

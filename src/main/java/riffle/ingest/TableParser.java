@@ -3,7 +3,9 @@ package riffle.ingest;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 import riffle.model.ColumnRole;
+import riffle.model.ControlChars;
 
 /**
  * Turns decoded text into a {@link SurveyTable}: delimiter, records, header, the ragged-row policy
@@ -106,6 +108,7 @@ final class TableParser {
     }
     List<SurveyRow> sample = rows.subList(0, Math.min(rows.size(), RoleDetector.SAMPLE));
     List<Column> columns = RoleDetector.detect(names, named, sample, header.line());
+    checkCodeNames(columns, rows);
     return new SurveyTable(
         in.source(),
         in.encoding(),
@@ -116,6 +119,28 @@ final class TableParser {
         rows,
         problems.list(),
         ragged + blank - trailingBlank);
+  }
+
+  /** Codes in a codes column become code names, which may not hold a control character. */
+  private static void checkCodeNames(List<Column> columns, List<SurveyRow> rows) throws BadInput {
+    for (Column c : columns) {
+      if (c.role() != ColumnRole.CODES) {
+        continue;
+      }
+      for (SurveyRow r : rows) {
+        for (String code : CodeList.split(r.cell(c))) {
+          Optional<String> unsafe = ControlChars.problem("the code", code);
+          if (unsafe.isPresent()) {
+            throw new BadInput(
+                r.line(),
+                c.index() + 1,
+                unsafe.get()
+                    + "; a code's name is one line of ordinary characters: fix the codes in the"
+                    + " file");
+          }
+        }
+      }
+    }
   }
 
   /**

@@ -16,6 +16,7 @@ import riffle.app.Project;
 import riffle.app.SuggestionTrainer;
 import riffle.model.Code;
 import riffle.model.CodeDraft;
+import riffle.model.ControlChars;
 import riffle.model.Direction;
 import riffle.model.EditOutcome;
 import riffle.model.ShownSuggestion;
@@ -519,7 +520,7 @@ final class CodingRoutes {
     if (c.isEmpty()) {
       throw ApiError.badField("coder", "say who is coding: give your name as coder");
     }
-    if (c.length() > MAX_CODER || c.chars().anyMatch(Character::isISOControl)) {
+    if (c.length() > MAX_CODER || c.chars().anyMatch(ControlChars::breaksName)) {
       throw ApiError.badField(
           "coder", "a coder's name is at most " + MAX_CODER + " characters, on one line");
     }

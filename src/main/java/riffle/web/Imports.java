@@ -251,7 +251,11 @@ final class Imports implements AutoCloseable {
       if (s.wave().isBlank()) {
         throw ApiError.badField("wave", "the wave needs a name");
       }
-      b.wave(s.wave().strip());
+      try {
+        b.wave(s.wave().strip());
+      } catch (IllegalArgumentException e) {
+        throw ApiError.badField("wave", e.getMessage());
+      }
     }
     if (s.date() != null && !s.date().isBlank()) {
       try {

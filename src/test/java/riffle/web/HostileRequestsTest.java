@@ -152,6 +152,51 @@ class HostileRequestsTest {
   }
 
   @Test
+  void namesWithControlCharactersAreRefusedByField() throws Exception {
+    JsonNode before = summary();
+    JsonNode codesBefore = get("/api/codes");
+    WebServerTest.Answer code =
+        post("/api/codes", "{\"coder\": \"ana\", \"name\": \"Price\u202Eoff\"}");
+    assertEquals(400, code.status(), code.json() + "");
+    assertTrue(code.json().get("error").asText().contains("\\u202E"), code.json() + "");
+    WebServerTest.Answer theme =
+        post(
+            "/api/codes",
+            "{\"coder\": \"ana\", \"name\": \"Price\", \"parent\": \"Cost\\nand more\"}");
+    assertEquals(400, theme.status(), theme.json() + "");
+    WebServerTest.Answer wave =
+        post(
+            "/api/import/preview",
+            "{\"paste\": \"id\\tWhy?\\n1\\tthe delivery date was unclear\\n\", \"wave\":"
+                + " \"Wave\\u001b[2J 3\"}");
+    assertEquals(400, wave.status(), wave.json() + "");
+    assertEquals("wave", wave.json().get("where").get("field").asText());
+    WebServerTest.Answer coder = post("/api/undo", "{\"coder\": \"ana\\u009b8m\"}");
+    assertEquals(400, coder.status(), coder.json() + "");
+    assertEquals("coder", coder.json().get("where").get("field").asText());
+    WebServerTest.Answer segment =
+        WebServerTest.send(
+            HttpRequest.newBuilder(server.url().resolve("/api/answers?segment=dev%1Bice%3Dmobile"))
+                .GET());
+    assertEquals(400, segment.status(), segment.json() + "");
+    assertTrue(segment.json().get("error").asText().contains("segment column"));
+    assertEquals(before, summary());
+    assertEquals(codesBefore, get("/api/codes"));
+  }
+
+  private static JsonNode get(String path) throws Exception {
+    return WebServerTest.send(HttpRequest.newBuilder(server.url().resolve(path)).GET()).json();
+  }
+
+  private static WebServerTest.Answer post(String path, String json) throws Exception {
+    return WebServerTest.send(
+        HttpRequest.newBuilder(server.url().resolve(path))
+            .header("Origin", WebServerTest.origin(server))
+            .header("Content-Type", "application/json")
+            .POST(HttpRequest.BodyPublishers.ofString(json)));
+  }
+
+  @Test
   void anUnexpectedFailureNamesNoExceptionClass() {
     Errors.Failure f = Errors.of(new NullPointerException("Cannot invoke \"String.strip()\""));
     assertEquals(500, f.status());
