@@ -18,7 +18,7 @@ final class TableParser {
       String text,
       String encoding,
       boolean encodingDetected,
-      List<String> warnings,
+      List<EncodingSniffer.Warning> warnings,
       boolean paste) {}
 
   private TableParser() {}
@@ -26,11 +26,11 @@ final class TableParser {
   static SurveyTable parse(Input in, ImportSettings settings) throws BadInput {
     String text = in.text();
     ProblemList problems = new ProblemList(in.source(), settings.maxProblems());
-    for (String w : in.warnings()) {
-      // Decoding warnings either concern replaced bytes (placed at the first replacement) or the
-      // byte-order mark, which is on line 1.
-      long line = w.indexOf('\uFFFD') >= 0 ? lineOf(text, text.indexOf('\uFFFD')) : 1;
-      problems.add(line, 0, w);
+    for (EncodingSniffer.Warning w : in.warnings()) {
+      problems.add(w.line(), 0, w.message());
+    }
+    for (EncodingSniffer.Warning w : EncodingSniffer.doubleEncoded(text)) {
+      problems.add(w.line(), 0, w.message());
     }
     Delimiter excelHint = sepLine(text);
     Delimiter delimiter;
