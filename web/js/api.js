@@ -35,6 +35,12 @@ export async function api(path, { method = 'GET', body, raw = false } = {}) {
   return data;
 }
 
+/** The whole masked text of an answer the server sent only the start of (its `truncated` flag). */
+export async function wholeText(answerId) {
+  const got = await api(`/api/answers/${answerId}/text`);
+  return got.text;
+}
+
 /** A query string from an object; arrays repeat their key; empty values are left out. */
 export function query(params) {
   const q = new URLSearchParams();

@@ -6,12 +6,14 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import riffle.coding.Codebook;
 import riffle.index.AnswerIndex;
 import riffle.index.QuerySyntaxException;
 import riffle.model.Assignment;
 import riffle.model.Code;
 import riffle.model.InputException;
+import riffle.model.ShownText;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
 
@@ -66,6 +68,7 @@ public final class AnswerBrowser {
     Map<Long, List<Assignment>> assigned = store.assignments(page);
     List<AnswerPage.Entry> entries = new ArrayList<>(page.size());
     for (ProjectStore.AnswerRow r : store.answerRows(page)) {
+      int cut = ShownText.cut(r.masked(), ShownText.MAX_CHARS);
       entries.add(
           new AnswerPage.Entry(
               r.id(),
@@ -73,12 +76,25 @@ public final class AnswerBrowser {
               r.wave(),
               r.question(),
               numbers.getOrDefault(r.question(), 0),
-              r.masked(),
+              r.masked().substring(0, cut),
+              cut < r.masked().length(),
+              r.masked().length(),
               r.substantive(),
               r.segments(),
               assigned.getOrDefault(r.id(), List.of())));
     }
     return new AnswerPage(whole, ids.length, coded, from, entries);
+  }
+
+  /**
+   * The whole masked text of one answer, for a page that was sent only its start.
+   *
+   * @return the text, or empty when there is no such answer
+   */
+  public Optional<String> text(long answerId) throws InputException {
+    return store.answerRows(List.of(answerId)).stream()
+        .findFirst()
+        .map(ProjectStore.AnswerRow::masked);
   }
 
   /** How many answers carry each code, by code id (codes nobody used are left out). */

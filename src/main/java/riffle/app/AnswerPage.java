@@ -30,7 +30,10 @@ public record AnswerPage(String query, int total, int coded, int offset, List<En
    * @param wave the wave's name
    * @param question the question's text
    * @param questionNumber the question's number (1 = first)
-   * @param text the masked text, which spans point into
+   * @param text the masked text, which spans point into; only its start when {@code truncated}
+   * @param truncated true when {@code text} is the first {@link riffle.model.ShownText#MAX_CHARS}
+   *     characters of a longer answer (the whole is {@link AnswerBrowser#text})
+   * @param length the length of the whole masked text, in characters
    * @param substantive false for a non-answer
    * @param segments the respondent's metadata
    * @param assignments its codes, in the order given
@@ -42,6 +45,8 @@ public record AnswerPage(String query, int total, int coded, int offset, List<En
       String question,
       int questionNumber,
       String text,
+      boolean truncated,
+      int length,
       boolean substantive,
       Map<String, String> segments,
       List<Assignment> assignments) {

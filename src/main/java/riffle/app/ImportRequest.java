@@ -119,6 +119,12 @@ public final class ImportRequest {
       return this;
     }
 
+    /** Refuse exports whose header has more columns than this. */
+    public Builder maxColumns(int columns) {
+      settings.maxColumns(columns);
+      return this;
+    }
+
     /** An open-text question column; repeatable. */
     public Builder textColumn(String header) {
       settings.textColumn(header);

@@ -3,6 +3,7 @@ package riffle.ingest;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import riffle.model.ColumnRole;
 import riffle.model.ControlChars;
@@ -52,6 +53,19 @@ final class TableParser {
     }
     CsvRecords.Raw header = records.get(h);
     int width = width(header.cells(), records, h);
+    if (width > settings.maxColumns()) {
+      throw new BadInput(
+          header.line(),
+          settings.maxColumns() + 1,
+          String.format(
+              Locale.ROOT,
+              "the header has %,d columns, over the limit of %,d; keep only the columns the"
+                  + " analysis needs (delete the others in the spreadsheet), or raise the limit"
+                  + " with --max-columns %d",
+              width,
+              settings.maxColumns(),
+              width));
+    }
     String[] names = HeaderNames.of(header.cells(), width, header.line(), problems);
     ColumnRole[] named = RoleDetector.named(names, settings, header.line());
 

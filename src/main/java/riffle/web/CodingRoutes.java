@@ -20,6 +20,7 @@ import riffle.model.ControlChars;
 import riffle.model.Direction;
 import riffle.model.EditOutcome;
 import riffle.model.ShownSuggestion;
+import riffle.model.ShownText;
 import riffle.model.Span;
 import riffle.model.SuggestionReport;
 
@@ -56,6 +57,7 @@ final class CodingRoutes {
     cfg.routes.post("/api/rules/apply", this::applyRules);
     cfg.routes.post("/api/rules/{id}/remove", this::removeRule);
     cfg.routes.get("/api/answers", this::answers);
+    cfg.routes.get("/api/answers/{id}/text", this::answerText);
     cfg.routes.get("/api/assignments", this::assignments);
     cfg.routes.post("/api/assignments", this::assign);
     cfg.routes.post("/api/assignments/remove", this::unassign);
@@ -244,7 +246,9 @@ final class CodingRoutes {
     if (sample < 0 || sample > 50) {
       throw ApiError.badField("sample", "sample must be from 0 to 50, not " + sample);
     }
-    ctx.json(access.call(p -> p.coding().preview(known(p, code), query, sample)));
+    ctx.json(
+        access.call(
+            p -> p.coding().preview(known(p, code), query, sample).shortened(ShownText.MAX_CHARS)));
   }
 
   void applyRules(Context ctx) throws Exception {
@@ -313,6 +317,19 @@ final class CodingRoutes {
               }
               return p.answers().page(query);
             }));
+  }
+
+  /** The whole masked text of an answer the page was sent only the start of. */
+  void answerText(Context ctx) throws Exception {
+    long id = idParam(ctx);
+    String text =
+        access.call(
+            p ->
+                p.answers()
+                    .text(id)
+                    .orElseThrow(
+                        () -> ApiError.notFound("there is no answer " + id + " in this project")));
+    ctx.json(Map.of("id", id, "text", text));
   }
 
   void assignments(Context ctx) throws Exception {

@@ -23,6 +23,7 @@ import riffle.app.ImportRequest;
 import riffle.app.PhraseQuery;
 import riffle.app.SuggestionTrainer;
 import riffle.model.InputException;
+import riffle.model.ShownText;
 
 /**
  * Serves one project to the browser: the JSON API under {@code /api/} and the page from {@code
@@ -348,7 +349,7 @@ public final class WebServer implements AutoCloseable {
         throw ApiError.badParameter("q", "write a query, such as delivery or \"delivery date\"");
       }
       int limit = intParam(ctx, "limit", 50, 1, MAX_HITS);
-      ctx.json(access.call(p -> p.search(q, limit)));
+      ctx.json(access.call(p -> p.search(q, limit)).shortened(ShownText.MAX_CHARS));
     }
 
     void similar(Context ctx) throws Exception {
@@ -366,7 +367,7 @@ public final class WebServer implements AutoCloseable {
                 if (!p.answerIds().contains(id)) {
                   throw ApiError.notFound("there is no answer " + id + " in this project");
                 }
-                return p.similar(id, limit);
+                return p.similar(id, limit).shortened(ShownText.MAX_CHARS);
               }));
     }
 

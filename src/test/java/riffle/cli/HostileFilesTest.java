@@ -1,11 +1,14 @@
 package riffle.cli;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import java.net.URISyntaxException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.Map;
@@ -62,5 +65,81 @@ class HostileFilesTest {
     for (String t : texts.values()) {
       assertFalse(t.contains("Ã") || t.contains("\uFFFD"), t);
     }
+  }
+
+  @Test
+  void aFileOfFiveThousandColumnsIsRefusedAtItsHeaderAndChangesNothing() throws Exception {
+    assertEquals(
+        0,
+        CliTest.riffle(
+                "import",
+                "--project",
+                project(),
+                "--file",
+                CliTest.fixture("two-questions.csv").toString(),
+                "--wave",
+                "W")
+            .code());
+    Path wide = dir.resolve("wide.csv");
+    StringBuilder sb = new StringBuilder("id");
+    for (int c = 1; c < 5_000; c++) {
+      sb.append(",Q").append(c).append(" what did you think?");
+    }
+    sb.append('\n');
+    for (int r = 0; r < 30; r++) {
+      sb.append(r);
+      for (int c = 1; c < 5_000; c++) {
+        sb.append(",the grinder was fine");
+      }
+      sb.append('\n');
+    }
+    Files.writeString(wide, sb, StandardCharsets.UTF_8);
+    byte[] before = Files.readAllBytes(Path.of(project()));
+    String info = CliTest.riffle("info", "--project", project(), "--json").out();
+
+    CliTest.Run run =
+        CliTest.riffle("import", "--project", project(), "--file", wide.toString(), "--json");
+    assertEquals(2, run.code(), run.err());
+    assertTrue(
+        run.err()
+            .contains("wide.csv:1:1001: the header has 5,000 columns, over the limit of 1,000"),
+        run.err());
+    assertTrue(run.err().contains("--max-columns 5000"), run.err());
+    assertEquals(1001, run.json().get("error").get("column").asInt());
+    assertArrayEquals(before, Files.readAllBytes(Path.of(project())), "not a byte changed");
+    assertEquals(info, CliTest.riffle("info", "--project", project(), "--json").out());
+  }
+
+  @Test
+  void aCellOfAMegabyteIsStoredWholeAndSaysOnlyItsStartIsAnalysed() throws Exception {
+    StringBuilder cell = new StringBuilder("The grinder was late");
+    while (cell.length() < (1 << 20)) {
+      cell.append(" and the burrs were fine");
+    }
+    Path file = dir.resolve("long.csv");
+    Files.writeString(
+        file,
+        "id,What almost stopped you?\nL1,\""
+            + cell
+            + "\"\nS1,The grinder arrived early and well packed\n",
+        StandardCharsets.UTF_8);
+    CliTest.Run run =
+        CliTest.riffle("import", "--project", project(), "--file", file.toString(), "--wave", "W");
+    assertEquals(0, run.code(), run.err());
+    assertTrue(
+        run.out()
+            .contains(
+                String.format(
+                    java.util.Locale.ROOT,
+                    "long.csv:2:2: this answer is %,d characters long; it is stored, searched and"
+                        + " shown whole, but only its first 5,000 characters are analysed",
+                    cell.length())),
+        run.out());
+    JsonNode hit =
+        CliTest.riffle("search", "--project", project(), "--query", "late", "--json")
+            .json()
+            .get("hits")
+            .get(0);
+    assertEquals(cell.toString(), hit.get("text").asText(), "stored whole");
   }
 }

@@ -197,6 +197,71 @@ class HostileRequestsTest {
   }
 
   @Test
+  void aLongAnswerIsSentShortenedWithAWayToTheWhole() throws Exception {
+    // A 1 MiB answer, made here: its first words, filler, and a word only its end holds.
+    StringBuilder cell = new StringBuilder("The grinder was late");
+    while (cell.length() < (1 << 20)) {
+      cell.append(" and the burrs were fine");
+    }
+    cell.append(" zanzibarish");
+    String csv =
+        "id,What almost stopped you?\nL1,\""
+            + cell
+            + "\"\nS1,The grinder arrived early and well packed\n";
+    Path folder = java.nio.file.Files.createDirectories(dir.resolve("long"));
+    Path file = folder.resolve("long.csv");
+    java.nio.file.Files.writeString(file, csv, StandardCharsets.UTF_8);
+    Path project = folder.resolve("long.riffle");
+    riffle.app.Project.importInto(
+        project,
+        riffle.app.ImportRequest.from(new riffle.app.ImportSource.File(file)).wave("W").get(),
+        riffle.model.Progress.NONE);
+    try (WebServer s = WebServer.start(project, WebServer.Options.defaults())) {
+      HttpRequest.Builder page = HttpRequest.newBuilder(s.url().resolve("/api/answers")).GET();
+      WebServerTest.Answer answers = WebServerTest.send(page);
+      assertEquals(200, answers.status());
+      assertTrue(answers.raw().body().length() < 20_000, "a page never ships the megabyte");
+      JsonNode longOne = null;
+      for (JsonNode a : answers.json().get("answers")) {
+        if (a.get("respondent").asText().equals("L1")) {
+          longOne = a;
+        } else {
+          assertFalse(a.get("truncated").asBoolean());
+        }
+      }
+      assertTrue(longOne.get("truncated").asBoolean());
+      assertEquals(cell.length(), longOne.get("length").asInt());
+      assertEquals(
+          cell.substring(0, riffle.model.ShownText.MAX_CHARS), longOne.get("text").asText());
+
+      long id = longOne.get("id").asLong();
+      WebServerTest.Answer whole =
+          WebServerTest.send(
+              HttpRequest.newBuilder(s.url().resolve("/api/answers/" + id + "/text")).GET());
+      assertEquals(cell.toString(), whole.json().get("text").asText());
+      assertEquals(
+          404,
+          WebServerTest.send(
+                  HttpRequest.newBuilder(s.url().resolve("/api/answers/999999/text")).GET())
+              .status());
+
+      WebServerTest.Answer end =
+          WebServerTest.send(
+              HttpRequest.newBuilder(s.url().resolve("/api/search?q=zanzibarish")).GET());
+      assertEquals(1, end.json().get("total").asInt(), "the whole answer is searched");
+      JsonNode hit = end.json().get("hits").get(0);
+      assertTrue(hit.get("truncated").asBoolean());
+      assertEquals(riffle.model.ShownText.MAX_CHARS, hit.get("text").asText().length());
+      assertEquals(0, hit.get("highlight").size(), "the match lies past what was sent");
+      WebServerTest.Answer start =
+          WebServerTest.send(HttpRequest.newBuilder(s.url().resolve("/api/search?q=late")).GET());
+      JsonNode first = start.json().get("hits").get(0).get("highlight").get(0);
+      assertEquals("late", cell.substring(first.get("start").asInt(), first.get("end").asInt()));
+      assertTrue(start.raw().body().length() < 20_000);
+    }
+  }
+
+  @Test
   void anUnexpectedFailureNamesNoExceptionClass() {
     Errors.Failure f = Errors.of(new NullPointerException("Cannot invoke \"String.strip()\""));
     assertEquals(500, f.status());
