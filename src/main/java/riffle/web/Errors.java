@@ -78,7 +78,6 @@ final class Errors {
       case 400 ->
           "the request cannot be read (its address, headers or body are malformed); check the"
               + " address and send it again";
-      case 408 -> "the request took too long to arrive; send it again";
       case 413 ->
           "the request is too large: a JSON body may hold at most "
               + (WebServer.MAX_JSON >> 20)

@@ -149,6 +149,18 @@ class HostileRequestsTest {
     assertEquals(431, bigHeader.status(), bigHeader.head());
     assertTrue(bigHeader.contentType().startsWith("application/json"), bigHeader.head());
     assertRefusal(431, Json.MAPPER.readTree(bigHeader.body()), "big header");
+
+    Raw longAddress =
+        raw(
+            "GET /api/search?q="
+                + "a".repeat(20_000)
+                + " HTTP/1.1\r\nHost: "
+                + host()
+                + "\r\nConnection: close\r\n\r\n");
+    assertEquals(414, longAddress.status(), longAddress.head());
+    JsonNode json = Json.MAPPER.readTree(longAddress.body());
+    assertRefusal(414, json, "long address");
+    assertTrue(json.get("error").asText().contains("address is too long"), json.toString());
   }
 
   @Test
@@ -269,6 +281,14 @@ class HostileRequestsTest {
     assertFalse(message.contains("NullPointerException"), message);
     assertFalse(message.contains("strip"), message);
     assertTrue(message.contains("nothing was half-written"), message);
+
+    // Javalin's own refusals keep their status and get our words, never their reason text
+    Errors.Failure inside = Errors.of(new io.javalin.http.InternalServerErrorResponse("boom"));
+    assertEquals(500, inside.status());
+    assertTrue(inside.body().get("error").toString().contains("nothing was half-written"));
+    Errors.Failure odd = Errors.of(new io.javalin.http.HttpResponseException(418, "teapot"));
+    assertEquals(418, odd.status());
+    assertEquals("the request cannot be served (HTTP 418)", odd.body().get("error"));
   }
 
   private static String host() {
