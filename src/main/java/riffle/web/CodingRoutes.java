@@ -288,7 +288,7 @@ final class CodingRoutes {
         throw ApiError.badParameter(
             "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
       }
-      segments.put(s.substring(0, eq).strip(), s.substring(eq + 1).strip());
+      segments.put(ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
     }
     Optional<Boolean> coded =
         switch (Optional.ofNullable(ctx.queryParam("coded")).orElse("").strip()) {

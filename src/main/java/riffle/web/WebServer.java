@@ -379,7 +379,8 @@ public final class WebServer implements AutoCloseable {
           throw ApiError.badParameter(
               "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
         }
-        segments.put(s.substring(0, eq).strip(), s.substring(eq + 1).strip());
+        segments.put(
+            ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
       }
       PhraseQuery query;
       try {

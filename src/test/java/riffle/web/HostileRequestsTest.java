@@ -192,6 +192,15 @@ class HostileRequestsTest {
                 .GET());
     assertEquals(400, segment.status(), segment.json() + "");
     assertTrue(segment.json().get("error").asText().contains("segment column"));
+    assertEquals("segment", segment.json().get("where").get("parameter").asText());
+    for (String route : List.of("/api/phrases", "/api/quotes")) {
+      WebServerTest.Answer other =
+          WebServerTest.send(
+              HttpRequest.newBuilder(server.url().resolve(route + "?segment=dev%E2%80%AEice%3Dx"))
+                  .GET());
+      assertEquals(400, other.status(), route + ": " + other.json());
+      assertEquals("segment", other.json().get("where").get("parameter").asText(), route);
+    }
     assertEquals(before, summary());
     assertEquals(codesBefore, get("/api/codes"));
   }
