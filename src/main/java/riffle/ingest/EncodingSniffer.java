@@ -20,11 +20,12 @@ import java.util.Optional;
  * well-formed multi-byte UTF-8 sequence, windows-1252; else the file mixes encodings (exports
  * concatenated from two sources) and each physical line is decoded on its own: a line that is valid
  * UTF-8 as UTF-8, a line with stray bytes and no well-formed multi-byte sequence as windows-1252, a
- * line with both as UTF-8 with the stray bytes replaced by U+FFFD. Every line not read as plain
- * UTF-8 gets a warning with its line number. NUL bytes not explained by UTF-16, well-known binary
- * signatures (zip/xlsx, xls, pdf, gzip) or more than 5% control characters in the first 64 Ki
- * characters mean a binary file. An explicit encoding skips sniffing; a byte-order mark matching it
- * is still stripped.
+ * line with both as UTF-8 with the stray bytes replaced by U+FFFD. The lines read unlike most of
+ * the file (windows-1252 lines in a mostly UTF-8 file, or the other way round) and every line with
+ * replaced bytes get a warning with their line number, after one for the whole file. NUL bytes not
+ * explained by UTF-16, well-known binary signatures (zip/xlsx, xls, pdf, gzip) or more than 5%
+ * control characters in the first 64 Ki characters mean a binary file. An explicit encoding skips
+ * sniffing; a byte-order mark matching it is still stripped.
  *
  * <p>Whatever the encoding, a line that reads like UTF-8 text decoded as windows-1252 once before
  * it reached the export ({@code CafÃ© crÃ¨me} for {@code Café crème}) gets a warning; its text is
@@ -163,24 +164,24 @@ final class EncodingSniffer {
       return new Decoded(new String(b, WINDOWS_1252), "windows-1252", true, List.of());
     }
     StringBuilder text = new StringBuilder(b.length);
-    List<Warning> warnings = new ArrayList<>();
+    List<Warning> damaged = new ArrayList<>();
+    List<Long> utf8Lines = new ArrayList<>();
+    List<Long> latinLines = new ArrayList<>();
     long line = 1;
-    long latin = 0;
     for (int start = 0; start < b.length; line++) {
       int end = lineEnd(b, start);
       long[] counts = utf8Counts(b, start, end);
       if (counts[1] == 0) {
         text.append(new String(b, start, end - start, StandardCharsets.UTF_8));
+        if (counts[0] > 0) {
+          utf8Lines.add(line);
+        }
       } else if (counts[0] == 0) {
         text.append(new String(b, start, end - start, WINDOWS_1252));
-        latin++;
-        warnings.add(
-            new Warning(
-                line,
-                "this line is not valid UTF-8 and was read as windows-1252; check its answers"));
+        latinLines.add(line);
       } else {
         text.append(new String(b, start, end - start, StandardCharsets.UTF_8));
-        warnings.add(
+        damaged.add(
             new Warning(
                 line,
                 (counts[1] == 1 ? "1 byte on this line is" : counts[1] + " bytes on this line are")
@@ -191,19 +192,42 @@ final class EncodingSniffer {
       text.append(new String(b, end, after - end, StandardCharsets.US_ASCII));
       start = after;
     }
-    if (latin > 0) {
-      warnings.add(
-          0,
-          new Warning(
-              0,
-              "the file mixes encodings: "
-                  + (latin == 1 ? "1 line is" : latin + " lines are")
-                  + " not valid UTF-8 and "
-                  + (latin == 1 ? "was" : "were")
-                  + " read as windows-1252, the rest as UTF-8 (the lines are listed); check"
-                  + " them, or re-export the survey as UTF-8 CSV"));
+    if (latinLines.isEmpty()) {
+      return new Decoded(text.toString(), "UTF-8", true, List.copyOf(damaged));
     }
-    return new Decoded(text.toString(), latin > 0 ? MIXED : "UTF-8", true, List.copyOf(warnings));
+    // The lines named are those of the minority encoding: the ones decoded unlike the rest.
+    boolean mostlyUtf8 = utf8Lines.size() >= latinLines.size();
+    List<Long> odd = mostlyUtf8 ? latinLines : utf8Lines;
+    String oddAs = mostlyUtf8 ? "windows-1252" : "UTF-8";
+    String restAs = mostlyUtf8 ? "UTF-8" : "windows-1252";
+    List<Warning> warnings = new ArrayList<>();
+    warnings.add(
+        new Warning(
+            0,
+            "the file mixes encodings: "
+                + (odd.size() == 1 ? "1 line" : odd.size() + " lines")
+                + " (listed) "
+                + (odd.size() == 1 ? "was" : "were")
+                + " read as "
+                + oddAs
+                + ", the rest as "
+                + restAs
+                + "; check them, or re-export the survey as UTF-8 CSV"));
+    for (long l : odd) {
+      warnings.add(
+          new Warning(
+              l,
+              mostlyUtf8
+                  ? "this line is not valid UTF-8 and was read as windows-1252; check its answers"
+                  : "this line is valid UTF-8 and was read as UTF-8, unlike most of the file;"
+                      + " check its answers"));
+    }
+    warnings.addAll(damaged);
+    return new Decoded(
+        text.toString(),
+        mostlyUtf8 ? MIXED : "windows-1252 and UTF-8 (line by line)",
+        true,
+        List.copyOf(warnings));
   }
 
   /** Where the line starting at {@code start} ends: its CR or LF, or the end of the bytes. */

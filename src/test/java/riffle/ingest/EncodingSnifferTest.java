@@ -91,10 +91,28 @@ class EncodingSnifferTest {
     assertEquals(utf8 + latin + latin + "3,\u00fcber gut\n", d.text());
     assertEquals(3, d.warnings().size(), d.warnings().toString());
     assertEquals(0, d.warnings().get(0).line());
-    assertTrue(d.warnings().get(0).message().contains("2 lines are not valid UTF-8"));
+    assertTrue(
+        d.warnings().get(0).message().contains("2 lines (listed) were read as windows-1252"),
+        d.warnings().get(0).message());
     assertEquals(5, d.warnings().get(1).line());
     assertEquals(6, d.warnings().get(2).line());
     assertTrue(d.warnings().get(1).message().contains("read as windows-1252"));
+  }
+
+  @Test
+  void aMostlyWindows1252FileNamesItsFewUtf8Lines() throws BadInput {
+    String latin = "1,Tr\u00e8s bon caf\u00e9, livr\u00e9 \u00e0 temps\n";
+    byte[] b =
+        concat(
+            ("id,answer\n" + latin.repeat(4)).getBytes(CP1252),
+            "2,Sch\u00f6ne M\u00fchle\n".getBytes(StandardCharsets.UTF_8));
+    EncodingSniffer.Decoded d = sniff(b);
+    assertEquals("windows-1252 and UTF-8 (line by line)", d.label());
+    assertEquals("id,answer\n" + latin.repeat(4) + "2,Sch\u00f6ne M\u00fchle\n", d.text());
+    assertEquals(2, d.warnings().size(), d.warnings().toString());
+    assertTrue(d.warnings().get(0).message().contains("1 line (listed) was read as UTF-8"));
+    assertEquals(6, d.warnings().get(1).line());
+    assertTrue(d.warnings().get(1).message().contains("unlike most of the file"));
   }
 
   @Test
