@@ -46,6 +46,17 @@ class TerminalTextTest {
   }
 
   @Test
+  void singleCharactersAndClosingGoThroughTheSameRule() {
+    ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+    PrintWriter w = TerminalText.writer(new PrintStream(bytes, true, StandardCharsets.UTF_8));
+    w.print('\u001B');
+    w.print('x');
+    w.print('\r');
+    w.close();
+    assertEquals("\\u001Bx\\u000D", bytes.toString(StandardCharsets.UTF_8));
+  }
+
+  @Test
   void jsonStaysValidAndMeansTheSame() throws Exception {
     String value = "x\u009B\u202E\u001B\u007Fy";
     String json = printed(Json.MAPPER.writeValueAsString(Map.of("text", value)));
