@@ -10,7 +10,7 @@ export class ApiError extends Error {
 }
 
 /**
- * Calls the API. body: a value sent as JSON, or, with raw: true, bytes sent as they are.
+ * Calls the API. body: a value sent as JSON, or, with raw: true, bytes or a File sent as they are.
  * Resolves to the parsed JSON answer; rejects with ApiError.
  */
 export async function api(path, { method = 'GET', body, raw = false } = {}) {
@@ -33,6 +33,12 @@ export async function api(path, { method = 'GET', body, raw = false } = {}) {
   }
   if (!res.ok) throw new ApiError(res.status, data);
   return data;
+}
+
+/** The whole masked text of an answer the server sent only the start of (its `truncated` flag). */
+export async function wholeText(answerId) {
+  const got = await api(`/api/answers/${answerId}/text`);
+  return got.text;
 }
 
 /** A query string from an object; arrays repeat their key; empty values are left out. */

@@ -162,10 +162,10 @@ async function chooseFile() {
   hideErrors();
   els.paste.value = '';
   try {
-    const bytes = await file.arrayBuffer();
+    // The file itself is the body: the browser streams it, and the server writes it to disk.
     const receipt = await api(`/api/uploads?name=${encodeURIComponent(file.name)}`, {
       method: 'POST',
-      body: bytes,
+      body: file,
       raw: true,
     });
     source = { upload: receipt.upload, name: file.name };

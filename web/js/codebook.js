@@ -309,7 +309,7 @@ function renderRules() {
       fill(
         out,
         h('p', { id: 'rule-preview-count' }, `${plural(p.matches, 'answer')} match; ${count(p.would_code)} would get \u201c${p.code}\u201d, ${count(p.already_coded)} have it already, ${count(p.kept_off)} stay without it (a person took it off).`),
-        p.sample.length ? h('ul', { class: 'sample' }, p.sample.map((s) => h('li', {}, s.text))) : null,
+        p.sample.length ? h('ul', { class: 'sample' }, p.sample.map((s) => h('li', {}, s.truncated ? `${s.text}\u2026` : s.text))) : null,
       );
       save.hidden = false;
     } catch (e) {

@@ -2,7 +2,7 @@
 // once (the page updates itself first) and is sent in order through one queue; the server's answer
 // then replaces the page's guess. A change that fails is retried, and if the server refuses it the
 // reason appears on the answer it concerned.
-import { api, query } from './api.js';
+import { api, query, wholeText } from './api.js';
 import { h, fill, count, plural, position } from './dom.js';
 import { coderBar, current as coderName, onCoder } from './coder.js';
 import { orderChoice } from './queue.js';
@@ -676,10 +676,30 @@ function answerText(answer, id) {
   return p;
 }
 
+// A long answer comes with its first characters only (truncated); this fetches the whole text
+// when asked. It sits outside the answer's paragraph, so selections for spans count only the text.
+function showAll(answer) {
+  if (!answer.truncated) return null;
+  const fetchAll = async (e) => {
+    e.stopPropagation();
+    try {
+      answer.text = await wholeText(answer.id);
+      answer.truncated = false;
+      errors.delete(answer.id);
+    } catch (err) {
+      errors.set(answer.id, `Could not show the whole answer: ${err.message}`);
+    }
+    renderAll();
+  };
+  return h('button', { type: 'button', class: 'quiet show-all', on: { click: fetchAll } }, `Show all ${count(answer.length)} characters`);
+}
+
+// The answer's wave, question, respondent and segments. Each value from the export sits in its own
+// <bdi>, so a bidirectional override inside one (U+202E …) cannot reorder the rest of the line.
 function meta(answer) {
-  const seg = Object.entries(answer.segments || {}).map(([k, v]) => `${k} ${v}`);
-  const read = answer.substantive ? (readNow(answer) ? 'read' : 'not read yet') : 'non-answer';
-  return [answer.wave, `Q${answer.question_number}`, `respondent ${answer.respondent}`, ...seg, read].filter(Boolean).join(' \u00b7 ');
+  const seg = Object.entries(answer.segments || {}).map(([k, v]) => [h('bdi', {}, k), ' ', h('bdi', {}, v)]);
+  const parts = [h('bdi', {}, answer.wave), `Q${answer.question_number}`, ['respondent ', h('bdi', {}, answer.respondent)], ...seg, answer.substantive ? (readNow(answer) ? 'read' : 'not read yet') : 'non-answer'].filter(Boolean);
+  return parts.flatMap((part, i) => (i === 0 ? [part] : [' \u00b7 ', part]));
 }
 
 function focusCard(answer) {
@@ -688,9 +708,10 @@ function focusCard(answer) {
   return h(
     'article',
     { class: 'answer-card', id: 'coding-card', 'data-answer': String(answer.id), 'aria-labelledby': 'coding-card-title' },
-    h('p', { class: 'meta', id: 'coding-card-title' }, `Answer ${count(n)} of ${count(page.total)} \u00b7 ${meta(answer)}`),
+    h('p', { class: 'meta', id: 'coding-card-title' }, `Answer ${count(n)} of ${count(page.total)} \u00b7 `, meta(answer)),
     h('p', { class: 'question' }, answer.question),
     answerText(answer, 'coding-text'),
+    showAll(answer),
     chips(answer, 'coding-codes'),
     error ? h('p', { class: 'error', role: 'alert', id: 'coding-answer-error' }, error) : null,
     suggestionBox(answer),
@@ -736,8 +757,9 @@ function listRow(answer, i) {
       'aria-current': i === at ? 'true' : null,
       on: { click: () => { at = i; renderAll(); } },
     },
-    h('p', { class: 'meta' }, `${count(page.offset + i + 1)} \u00b7 ${meta(answer)}`),
+    h('p', { class: 'meta' }, `${count(page.offset + i + 1)} \u00b7 `, meta(answer)),
     h('p', { class: 'answer-text' }, answer.text),
+    showAll(answer),
     chips(answer, i === at ? 'coding-codes' : null),
     error ? h('p', { class: 'error', role: 'alert' }, error) : null,
   );
@@ -853,7 +875,7 @@ function bulkPanel() {
             fill(
               out,
               h('p', {}, `${plural(p.would_code, 'answer')} would get \u201c${p.code}\u201d`, p.already_coded ? `; ${count(p.already_coded)} have it already` : '', p.kept_off ? `; ${count(p.kept_off)} left alone (a person took it off)` : '', '.'),
-              p.sample.length ? h('ul', { class: 'sample' }, p.sample.map((s) => h('li', {}, s.text))) : null,
+              p.sample.length ? h('ul', { class: 'sample' }, p.sample.map((s) => h('li', {}, s.truncated ? `${s.text}\u2026` : s.text))) : null,
             );
             go.textContent = `Give it to ${plural(p.would_code, 'answer')}`;
             go.hidden = p.would_code === 0;

@@ -1,6 +1,6 @@
 // Finding answers: the analysts' query language, counts per wave, the matched words marked, and
 // answers like one answer.
-import { api, query, ApiError } from './api.js';
+import { api, wholeText, query, ApiError } from './api.js';
 import { h, fill, clear, count, plural, highlighted } from './dom.js';
 
 const SYNTAX = [
@@ -109,18 +109,32 @@ function show(result, title) {
     result.total > result.hits.length ? h('p', { class: 'hint' }, `Showing the ${count(result.hits.length)} most relevant.`) : null,
     result.total === 0 ? h('p', { class: 'empty' }, 'Nothing matches. Try fewer words, or a word’s stem with *.') : null,
   );
-  fill(
-    els.hits,
-    result.hits.map((hit) =>
-      h(
-        'li',
-        { class: 'hit' },
-        h('p', { class: 'meta' }, h('span', {}, hit.wave), ' · ', h('span', {}, hit.respondent), ' · ', h('span', { class: 'question' }, hit.question)),
-        h('p', { class: 'answer' }, highlighted(hit.text, hit.highlight)),
-        h('button', { type: 'button', class: 'quiet', on: { click: () => like(hit) } }, 'Answers like this'),
-      ),
-    ),
+  fill(els.hits, result.hits.map(hitItem));
+}
+
+function hitItem(hit) {
+  const answer = h('p', { class: 'answer' }, highlighted(hit.text, hit.highlight));
+  // A long answer comes shortened; its whole text is fetched only when asked for.
+  const all = hit.truncated
+    ? h('button', { type: 'button', class: 'quiet show-all', on: { click: () => showAll(hit, answer, all) } }, 'Show all of this answer')
+    : null;
+  return h(
+    'li',
+    { class: 'hit' },
+    h('p', { class: 'meta' }, h('span', {}, hit.wave), ' · ', h('span', {}, hit.respondent), ' · ', h('span', { class: 'question' }, hit.question)),
+    answer,
+    all,
+    h('button', { type: 'button', class: 'quiet', on: { click: () => like(hit) } }, 'Answers like this'),
   );
+}
+
+async function showAll(hit, answer, button) {
+  try {
+    fill(answer, highlighted(await wholeText(hit.answer_id), hit.highlight));
+    button.remove();
+  } catch (e) {
+    fill(button, `Show all of this answer (${e.message})`);
+  }
 }
 
 function hideError() {

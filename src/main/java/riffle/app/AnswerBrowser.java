@@ -6,6 +6,7 @@ import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import riffle.coding.Codebook;
 import riffle.index.AnswerIndex;
 import riffle.index.QuerySyntaxException;
@@ -77,18 +78,11 @@ public final class AnswerBrowser {
     List<AnswerPage.Entry> entries = new ArrayList<>(page.size());
     for (ProjectStore.AnswerRow r : store.answerRows(page)) {
       entries.add(
-          new AnswerPage.Entry(
-              r.id(),
-              r.respondent(),
-              r.wave(),
-              r.question(),
+          AnswerPage.Entry.of(
+              r,
               numbers.getOrDefault(r.question(), 0),
-              r.masked(),
-              r.substantive(),
-              r.segments(),
               assigned.getOrDefault(r.id(), List.of()),
-              reads.containsKey(r.id()),
-              reads.containsKey(r.id()) && reads.get(r.id()).marked()));
+              reads.get(r.id())));
     }
     return new AnswerPage(whole, ids.length, coded, substantive, read, from, entries);
   }
@@ -123,6 +117,17 @@ public final class AnswerBrowser {
       }
     }
     return Arrays.copyOf(out, n);
+  }
+
+  /**
+   * The whole masked text of one answer, for a page that was sent only its start.
+   *
+   * @return the text, or empty when there is no such answer
+   */
+  public Optional<String> text(long answerId) throws InputException {
+    return store.answerRows(List.of(answerId)).stream()
+        .findFirst()
+        .map(ProjectStore.AnswerRow::masked);
   }
 
   /** How many answers carry each code, by code id (codes nobody used are left out). */

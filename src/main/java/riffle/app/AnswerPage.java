@@ -5,7 +5,10 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import riffle.model.AnswerRead;
 import riffle.model.Assignment;
+import riffle.model.ShownText;
+import riffle.store.ProjectStore;
 
 /**
  * One page of the answers a coder works through.
@@ -39,7 +42,10 @@ public record AnswerPage(
    * @param wave the wave's name
    * @param question the question's text
    * @param questionNumber the question's number (1 = first)
-   * @param text the masked text, which spans point into
+   * @param text the masked text, which spans point into; only its start when {@code truncated}
+   * @param truncated true when {@code text} is the first {@link riffle.model.ShownText#MAX_CHARS}
+   *     characters of a longer answer (the whole is {@link AnswerBrowser#text})
+   * @param length the length of the whole masked text, in characters
    * @param substantive false for a non-answer
    * @param segments the respondent's metadata
    * @param assignments its codes, in the order given
@@ -53,6 +59,8 @@ public record AnswerPage(
       String question,
       int questionNumber,
       String text,
+      boolean truncated,
+      int length,
       boolean substantive,
       Map<String, String> segments,
       List<Assignment> assignments,
@@ -65,6 +73,34 @@ public record AnswerPage(
       Objects.requireNonNull(text, "text");
       segments = Collections.unmodifiableMap(new LinkedHashMap<>(segments));
       assignments = List.copyOf(assignments);
+    }
+
+    /**
+     * An answer of the store as the screen shows it: its text cut to {@link ShownText#MAX_CHARS},
+     * its codes, and whether (and how) a person read it.
+     *
+     * @param read how a person read it, or null while nobody has
+     */
+    static Entry of(
+        ProjectStore.AnswerRow row,
+        int questionNumber,
+        List<Assignment> assignments,
+        AnswerRead read) {
+      int cut = ShownText.cut(row.masked(), ShownText.MAX_CHARS);
+      return new Entry(
+          row.id(),
+          row.respondent(),
+          row.wave(),
+          row.question(),
+          questionNumber,
+          row.masked().substring(0, cut),
+          cut < row.masked().length(),
+          row.masked().length(),
+          row.substantive(),
+          row.segments(),
+          assignments,
+          read != null,
+          read != null && read.marked());
     }
   }
 }

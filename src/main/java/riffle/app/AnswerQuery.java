@@ -7,6 +7,7 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.OptionalLong;
+import riffle.model.ControlChars;
 
 /**
  * Which answers to list for coding, and which page of them.
@@ -39,6 +40,7 @@ public record AnswerQuery(
     Objects.requireNonNull(code, "code");
     Objects.requireNonNull(text, "text");
     segments = Collections.unmodifiableMap(new LinkedHashMap<>(segments));
+    segments.keySet().forEach(k -> ControlChars.checkName("the segment column", k));
     if (offset < 0) {
       throw new IllegalArgumentException("offset must be 0 or more, not " + offset);
     }

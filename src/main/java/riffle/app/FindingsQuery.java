@@ -2,6 +2,7 @@ package riffle.app;
 
 import java.util.Objects;
 import java.util.Optional;
+import riffle.model.ControlChars;
 
 /**
  * What findings to compute.
@@ -25,5 +26,6 @@ public record FindingsQuery(
     Objects.requireNonNull(segment, "segment");
     Objects.requireNonNull(from, "from");
     Objects.requireNonNull(to, "to");
+    segment.ifPresent(s -> ControlChars.checkName("the segment column", s));
   }
 }

@@ -9,6 +9,7 @@ import java.util.Optional;
 import riffle.ingest.Delimiter;
 import riffle.ingest.ImportSettings;
 import riffle.model.ColumnRole;
+import riffle.model.ControlChars;
 
 /**
  * One import: what to read, into which wave, and how to read it. Built by {@link #from}; the
@@ -74,9 +75,13 @@ public final class ImportRequest {
       this.source = Objects.requireNonNull(source, "source");
     }
 
-    /** The wave to import into. */
+    /**
+     * The wave to import into.
+     *
+     * @throws IllegalArgumentException when the name holds a line break or a control character
+     */
     public Builder wave(String name) {
-      this.wave = name;
+      this.wave = name == null ? null : ControlChars.checkName("the wave name", name);
       return this;
     }
 
@@ -111,6 +116,12 @@ public final class ImportRequest {
             "--max-mb must be between 1 and " + (1L << 20) + ", not " + megabytes);
       }
       settings.maxBytes(megabytes << 20);
+      return this;
+    }
+
+    /** Refuse exports whose header has more columns than this. */
+    public Builder maxColumns(int columns) {
+      settings.maxColumns(columns);
       return this;
     }
 

@@ -4,6 +4,7 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
+import riffle.model.ControlChars;
 
 /**
  * What to mine: which answers, and optionally a wave to compare with.
@@ -22,6 +23,7 @@ public record PhraseQuery(
     int limit) {
   public PhraseQuery {
     segments = Collections.unmodifiableMap(new LinkedHashMap<>(segments));
+    segments.keySet().forEach(k -> ControlChars.checkName("the segment column", k));
     if (limit < 1 || limit > 10_000) {
       throw new IllegalArgumentException("--limit must be between 1 and 10000, not " + limit);
     }

@@ -3,6 +3,7 @@ package riffle.app;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import riffle.model.ControlChars;
 
 /**
  * Which buyer quotes to rank.
@@ -20,5 +21,6 @@ public record QuoteQuery(
     Objects.requireNonNull(code, "code");
     Objects.requireNonNull(wave, "wave");
     segments = Map.copyOf(segments);
+    segments.keySet().forEach(k -> ControlChars.checkName("the segment column", k));
   }
 }

@@ -203,18 +203,11 @@ public final class ReviewQueues {
           new QueuePage.Item(
               p + 1,
               q.read.contains(id),
-              new AnswerPage.Entry(
-                  row.id(),
-                  row.respondent(),
-                  row.wave(),
-                  row.question(),
+              AnswerPage.Entry.of(
+                  row,
                   questions.indexOf(row.question()) + 1,
-                  row.masked(),
-                  row.substantive(),
-                  row.segments(),
                   assigned.getOrDefault(id, List.of()),
-                  reads.containsKey(id),
-                  reads.containsKey(id) && reads.get(id).marked())));
+                  reads.get(id))));
     }
     return out;
   }

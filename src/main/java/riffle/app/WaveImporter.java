@@ -17,6 +17,7 @@ import java.util.HexFormat;
 import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import riffle.ingest.CodeList;
@@ -29,6 +30,7 @@ import riffle.ingest.UnreadableInputException;
 import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.ColumnRole;
+import riffle.model.ControlChars;
 import riffle.model.InputProblem;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
@@ -37,6 +39,7 @@ import riffle.model.WaveBatch;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
 import riffle.text.AnalysisCodec;
+import riffle.text.TextAnalyzer;
 
 /** Reads an export and stores it as (part of) a wave, all in one transaction. */
 final class WaveImporter {
@@ -55,6 +58,14 @@ final class WaveImporter {
     String wave = request.wave().map(String::strip).orElseGet(() -> defaultWave(request));
     if (wave.isEmpty()) {
       throw new IllegalArgumentException("the wave name is empty; give one with --wave NAME");
+    }
+    if (request.wave().isEmpty()) {
+      try {
+        ControlChars.checkName("the wave name", wave);
+      } catch (IllegalArgumentException e) {
+        throw new IllegalArgumentException(
+            e.getMessage() + " (it comes from the file's name; name the wave with --wave NAME)", e);
+      }
     }
     Optional<LocalDate> stored = store.waveDate(wave);
     if (stored.isPresent()
@@ -96,6 +107,7 @@ final class WaveImporter {
     Analyses.refresh(store, progress);
     List<InputProblem> problems = new ArrayList<>(table.problems());
     problems.addAll(outcome.problems());
+    problems.addAll(analysedInPart(table.source(), respondents, request.settings().maxProblems()));
     return new ImportReport(
         wave,
         date,
@@ -112,6 +124,50 @@ final class WaveImporter {
         outcome.codesCreated(),
         outcome.assignmentsAdded(),
         problems);
+  }
+
+  /**
+   * Notes for the answers longer than the analysed prefix: stored whole, analysed in part. At most
+   * {@code max} are listed, then one line counting the rest.
+   */
+  static List<InputProblem> analysedInPart(
+      String source, List<NewRespondent> respondents, int max) {
+    List<InputProblem> out = new ArrayList<>();
+    long unlisted = 0;
+    for (NewRespondent r : respondents) {
+      for (NewAnswer a : r.answers()) {
+        if (!a.analysis().truncated()) {
+          continue;
+        }
+        if (out.size() < max) {
+          out.add(
+              new InputProblem(
+                  source,
+                  a.line(),
+                  a.column(),
+                  String.format(
+                      Locale.ROOT,
+                      "this answer is %,d characters long; it is stored, searched and shown"
+                          + " whole, but only its first %,d characters are analysed for phrases,"
+                          + " suggestions and quotes",
+                      a.original().length(),
+                      TextAnalyzer.MAX_ANALYSED_CHARS)));
+        } else {
+          unlisted++;
+        }
+      }
+    }
+    if (unlisted > 0) {
+      out.add(
+          new InputProblem(
+              source,
+              0,
+              0,
+              unlisted
+                  + (unlisted == 1 ? " more answer" : " more answers")
+                  + " analysed only in part, not listed"));
+    }
+    return out;
   }
 
   /** Reads the request's export, before any project is opened. */

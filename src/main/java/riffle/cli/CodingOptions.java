@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
+import riffle.model.ControlChars;
 import riffle.model.EditOutcome;
 
 /** The options every command that reads or changes the coding shares. */
@@ -20,7 +21,9 @@ final class CodingOptions {
   @Mixin JsonOption json;
 
   String coder() {
-    return coder == null || coder.isBlank() ? Actor.current() : coder.strip();
+    return coder == null || coder.isBlank()
+        ? Actor.current()
+        : ControlChars.checkName("--coder", coder.strip());
   }
 
   /** Prints what a change did: its sentence, or the outcome as JSON. */

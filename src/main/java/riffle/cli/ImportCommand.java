@@ -126,6 +126,13 @@ final class ImportCommand implements Callable<Integer> {
       description = "Refuse exports larger than N MiB (default: ${DEFAULT-VALUE}).")
   long maxMb;
 
+  @Option(
+      names = "--max-columns",
+      paramLabel = "N",
+      defaultValue = "1000",
+      description = "Refuse exports with more than N columns (default: ${DEFAULT-VALUE}).")
+  int maxColumns;
+
   @Mixin JsonOption json;
 
   @Override
@@ -141,7 +148,8 @@ final class ImportCommand implements Callable<Integer> {
             .actor(Actor.current())
             .delimiter(delimiter)
             .encoding(encoding)
-            .maxMegabytes(maxMb);
+            .maxMegabytes(maxMb)
+            .maxColumns(maxColumns);
     textColumns.forEach(request::textColumn);
     codesColumns.forEach(request::codesColumn);
     metaColumns.forEach(request::metaColumn);

@@ -2,8 +2,6 @@ package riffle.cli;
 
 import java.io.InputStream;
 import java.io.PrintStream;
-import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -61,8 +59,8 @@ public final class Main implements Runnable {
   /** Runs one command with the given streams and returns its exit code. */
   public static int run(String[] args, InputStream in, PrintStream out, PrintStream err) {
     CommandLine cl = new CommandLine(new Main(in));
-    cl.setOut(new PrintWriter(out, true, StandardCharsets.UTF_8));
-    cl.setErr(new PrintWriter(err, true, StandardCharsets.UTF_8));
+    cl.setOut(TerminalText.writer(out));
+    cl.setErr(TerminalText.writer(err));
     cl.setExecutionExceptionHandler(new Failures());
     cl.setCaseInsensitiveEnumValuesAllowed(true);
     int code = cl.execute(args);

@@ -13,6 +13,7 @@ import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 import riffle.model.Code;
 import riffle.model.CodeDraft;
+import riffle.model.ControlChars;
 import riffle.model.Direction;
 
 /** The codebook's rules: drafts applied to codes, and the whole book checked. */
@@ -66,7 +67,8 @@ public final class Codebook {
   /**
    * A new code from a draft, placed last.
    *
-   * @throws IllegalArgumentException when the draft has no name or breaks a rule of the book
+   * @throws IllegalArgumentException when the draft has no name, its name holds a line break or a
+   *     control character, or it breaks a rule of the book
    */
   public static Code create(List<Code> book, CodeDraft draft, long id) {
     String name =
@@ -110,6 +112,7 @@ public final class Codebook {
               made.examples(),
               made.imported());
     }
+    ControlChars.checkName("the code name", made.name());
     List<Code> after = new ArrayList<>(book);
     after.add(made);
     check(after);
@@ -123,6 +126,9 @@ public final class Codebook {
    */
   public static Code change(List<Code> book, Code code, CodeDraft draft) {
     Code changed = apply(book, code, draft);
+    if (!changed.name().equals(code.name())) {
+      ControlChars.checkName("the code name", changed.name());
+    }
     check(replace(book, changed));
     return changed;
   }

@@ -16,16 +16,42 @@ import java.util.Optional;
  *
  * <p>Sniffing order: a byte-order mark (UTF-8, UTF-16LE, UTF-16BE); else UTF-16 without a mark when
  * the first 4 KiB show the NUL pattern of mostly-Latin UTF-16 (at least half of the byte pairs have
- * a NUL on one side and at most 2% on the other); else strict UTF-8; else UTF-8 with the stray
- * bytes replaced (and a warning) when well-formed multi-byte sequences outnumber stray bytes four
- * to one; else windows-1252. NUL bytes not explained by UTF-16, well-known binary signatures
- * (zip/xlsx, xls, pdf, gzip) or more than 5% control characters in the first 64 Ki characters mean
- * a binary file. An explicit encoding skips sniffing; a byte-order mark matching it is still
- * stripped.
+ * a NUL on one side and at most 2% on the other); else strict UTF-8; else, when no line holds a
+ * well-formed multi-byte UTF-8 sequence, windows-1252; else the file mixes encodings (exports
+ * concatenated from two sources) and each physical line is decoded on its own: a line that is valid
+ * UTF-8 as UTF-8, a line with stray bytes and no well-formed multi-byte sequence as windows-1252, a
+ * line with both as UTF-8 with the stray bytes replaced by U+FFFD. The lines read unlike most of
+ * the file (windows-1252 lines in a mostly UTF-8 file, or the other way round) and every line with
+ * replaced bytes get a warning with their line number, after one for the whole file. NUL bytes not
+ * explained by UTF-16, well-known binary signatures (zip/xlsx, xls, pdf, gzip) or more than 5%
+ * control characters in the first 64 Ki characters mean a binary file. An explicit encoding skips
+ * sniffing; a byte-order mark matching it is still stripped.
+ *
+ * <p>Whatever the encoding, a line that reads like UTF-8 text decoded as windows-1252 once before
+ * it reached the export ({@code CafÃ© crÃ¨me} for {@code Café crème}) gets a warning; its text is
+ * kept as it is.
  */
 final class EncodingSniffer {
-  /** Decoded text and how it was obtained. */
-  record Decoded(String text, String label, boolean detected, List<String> warnings) {}
+  /**
+   * Decoded text and how it was obtained.
+   *
+   * @param text the text, without a byte-order mark
+   * @param label how it was decoded, such as {@code UTF-8 (BOM)}
+   * @param detected true when sniffed rather than given
+   * @param warnings what the analyst should check, each on its line (0 for the whole file)
+   */
+  record Decoded(String text, String label, boolean detected, List<Warning> warnings) {}
+
+  /**
+   * A decoding problem worth a look.
+   *
+   * @param line the 1-based physical line, 0 for the whole file
+   * @param message what happened and what to do
+   */
+  record Warning(long line, String message) {}
+
+  /** The label of a file whose lines were decoded as UTF-8 and as windows-1252. */
+  static final String MIXED = "UTF-8 and windows-1252 (line by line)";
 
   static final String BINARY =
       "looks like a binary file, not a CSV/TSV export; export the survey as CSV";
@@ -35,13 +61,18 @@ final class EncodingSniffer {
   private static final int BINARY_SAMPLE = 65536;
   private static final double CONTROL_SHARE = 0.05;
 
-  /**
-   * A file whose well-formed UTF-8 sequences outnumber its stray bytes this many times is UTF-8
-   * with a few damaged answers, not windows-1252.
-   */
-  private static final int MOSTLY_UTF8 = 4;
+  /** The characters windows-1252 gives the bytes 0x80–0xBF, UTF-8's continuation bytes. */
+  private static final String CONTINUATIONS = continuations();
 
   private EncodingSniffer() {}
+
+  private static String continuations() {
+    byte[] b = new byte[0x40];
+    for (int i = 0; i < b.length; i++) {
+      b[i] = (byte) (0x80 + i);
+    }
+    return new String(b, WINDOWS_1252).replace("\uFFFD", "");
+  }
 
   /**
    * Decodes bytes.
@@ -115,29 +146,158 @@ final class EncodingSniffer {
     if (utf8 != null) {
       return new Decoded(utf8, "UTF-8", true, List.of());
     }
-    long[] counts = utf8Counts(b);
-    if (counts[0] > 0 && counts[0] >= MOSTLY_UTF8 * counts[1]) {
-      return new Decoded(
-          new String(b, StandardCharsets.UTF_8),
-          "UTF-8",
-          true,
-          List.of(
-              (counts[1] == 1 ? "1 byte is" : counts[1] + " bytes are")
-                  + " not valid UTF-8 and show as \uFFFD (the file mixes encodings);"
-                  + " check those answers or re-export the survey as UTF-8 CSV"));
+    return byLine(b);
+  }
+
+  /**
+   * Decodes bytes that are not valid UTF-8 as a whole: windows-1252 when no line holds a
+   * well-formed multi-byte UTF-8 sequence, else line by line.
+   */
+  private static Decoded byLine(byte[] b) {
+    boolean anyUtf8 = false;
+    for (int start = 0; start < b.length && !anyUtf8; ) {
+      int end = lineEnd(b, start);
+      anyUtf8 = utf8Counts(b, start, end)[0] > 0;
+      start = next(b, end);
     }
-    return new Decoded(new String(b, WINDOWS_1252), "windows-1252", true, List.of());
+    if (!anyUtf8) {
+      return new Decoded(new String(b, WINDOWS_1252), "windows-1252", true, List.of());
+    }
+    StringBuilder text = new StringBuilder(b.length);
+    List<Warning> damaged = new ArrayList<>();
+    List<Long> utf8Lines = new ArrayList<>();
+    List<Long> latinLines = new ArrayList<>();
+    long line = 1;
+    for (int start = 0; start < b.length; line++) {
+      int end = lineEnd(b, start);
+      long[] counts = utf8Counts(b, start, end);
+      if (counts[1] == 0) {
+        text.append(new String(b, start, end - start, StandardCharsets.UTF_8));
+        if (counts[0] > 0) {
+          utf8Lines.add(line);
+        }
+      } else if (counts[0] == 0) {
+        text.append(new String(b, start, end - start, WINDOWS_1252));
+        latinLines.add(line);
+      } else {
+        text.append(new String(b, start, end - start, StandardCharsets.UTF_8));
+        damaged.add(
+            new Warning(
+                line,
+                (counts[1] == 1 ? "1 byte on this line is" : counts[1] + " bytes on this line are")
+                    + " not valid UTF-8 and show as \uFFFD; check its answers or re-export the"
+                    + " survey as UTF-8 CSV"));
+      }
+      int after = next(b, end);
+      text.append(new String(b, end, after - end, StandardCharsets.US_ASCII));
+      start = after;
+    }
+    if (latinLines.isEmpty()) {
+      return new Decoded(text.toString(), "UTF-8", true, List.copyOf(damaged));
+    }
+    // The lines named are those of the minority encoding: the ones decoded unlike the rest.
+    boolean mostlyUtf8 = utf8Lines.size() >= latinLines.size();
+    List<Long> odd = mostlyUtf8 ? latinLines : utf8Lines;
+    String oddAs = mostlyUtf8 ? "windows-1252" : "UTF-8";
+    String restAs = mostlyUtf8 ? "UTF-8" : "windows-1252";
+    List<Warning> warnings = new ArrayList<>();
+    warnings.add(
+        new Warning(
+            0,
+            "the file mixes encodings: "
+                + (odd.size() == 1 ? "1 line" : odd.size() + " lines")
+                + " (listed) "
+                + (odd.size() == 1 ? "was" : "were")
+                + " read as "
+                + oddAs
+                + ", the rest as "
+                + restAs
+                + "; check them, or re-export the survey as UTF-8 CSV"));
+    for (long l : odd) {
+      warnings.add(
+          new Warning(
+              l,
+              mostlyUtf8
+                  ? "this line is not valid UTF-8 and was read as windows-1252; check its answers"
+                  : "this line is valid UTF-8 and was read as UTF-8, unlike most of the file;"
+                      + " check its answers"));
+    }
+    warnings.addAll(damaged);
+    return new Decoded(
+        text.toString(),
+        mostlyUtf8 ? MIXED : "windows-1252 and UTF-8 (line by line)",
+        true,
+        List.copyOf(warnings));
+  }
+
+  /** Where the line starting at {@code start} ends: its CR or LF, or the end of the bytes. */
+  private static int lineEnd(byte[] b, int start) {
+    int i = start;
+    while (i < b.length && b[i] != '\n' && b[i] != '\r') {
+      i++;
+    }
+    return i;
+  }
+
+  /** Where the next line starts, after the line end at {@code end} (CR LF, CR or LF). */
+  private static int next(byte[] b, int end) {
+    if (end >= b.length) {
+      return b.length;
+    }
+    return b[end] == '\r' && end + 1 < b.length && b[end + 1] == '\n' ? end + 2 : end + 1;
+  }
+
+  /**
+   * Finds lines that read like UTF-8 text decoded as windows-1252 once already: {@code Ã} or {@code
+   * Â} followed by a character windows-1252 gives a continuation byte ({@code Ã©} for {@code é},
+   * {@code Â°} for {@code °}), or {@code â} followed by two ({@code â€™} for {@code ’}). These
+   * pairs hardly occur in real text. One warning per line, naming the first pair and what it stood
+   * for.
+   */
+  static List<Warning> doubleEncoded(String text) {
+    List<Warning> out = new ArrayList<>();
+    long line = 1;
+    long warned = 0;
+    for (int i = 0; i < text.length(); i++) {
+      char c = text.charAt(i);
+      if (c == '\n' || (c == '\r' && (i + 1 == text.length() || text.charAt(i + 1) != '\n'))) {
+        line++;
+        continue;
+      }
+      int len = c == '\u00C3' || c == '\u00C2' ? 2 : c == '\u00E2' ? 3 : 0;
+      if (len == 0 || line == warned || i + len > text.length()) {
+        continue;
+      }
+      boolean all = true;
+      for (int k = 1; k < len && all; k++) {
+        all = CONTINUATIONS.indexOf(text.charAt(i + k)) >= 0;
+      }
+      if (!all) {
+        continue;
+      }
+      String seen = text.substring(i, i + len);
+      String meant = new String(seen.getBytes(WINDOWS_1252), StandardCharsets.UTF_8);
+      out.add(
+          new Warning(
+              line,
+              "this line reads like UTF-8 text that was decoded as windows-1252 before it was"
+                  + " exported (\""
+                  + seen
+                  + "\" where \""
+                  + meant
+                  + "\" was meant); its answers are kept as they are: fix them at the source and"
+                  + " import again"));
+      warned = line;
+    }
+    return out;
   }
 
   private static Decoded decodeAs(byte[] b, Charset cs) {
-    List<String> warnings = new ArrayList<>();
+    List<Warning> warnings = new ArrayList<>();
     String text = tryStrict(b, 0, cs);
-    if (text == null) {
+    boolean replaced = text == null;
+    if (replaced) {
       text = new String(b, cs);
-      warnings.add(
-          "some bytes are not valid "
-              + cs.name()
-              + " and show as \uFFFD; check the --encoding option or use --encoding auto");
     }
     String label = cs.name();
     boolean bom =
@@ -149,22 +309,33 @@ final class EncodingSniffer {
       label += " (BOM)"; // Java's UTF-16 decoder consumes the mark itself
     } else if (bom) {
       warnings.add(
-          "the file starts with the byte-order mark of another encoding than "
-              + cs.name()
-              + "; if the header looks garbled, use --encoding auto");
+          new Warning(
+              1,
+              "the file starts with the byte-order mark of another encoding than "
+                  + cs.name()
+                  + "; if the header looks garbled, use --encoding auto"));
+    }
+    if (replaced) {
+      warnings.add(
+          new Warning(
+              TableParser.lineOf(text, text.indexOf('\uFFFD')),
+              "some bytes are not valid "
+                  + cs.name()
+                  + " and show as \uFFFD; check the --encoding option or use --encoding auto"));
     }
     return new Decoded(text, label, false, List.copyOf(warnings));
   }
 
   /**
    * Counts well-formed multi-byte UTF-8 sequences ([0]) and bytes that belong to none ([1]),
-   * following the well-formed byte sequences table of the Unicode Standard, section 3.9.
+   * between {@code from} and {@code to}, following the well-formed byte sequences table of the
+   * Unicode Standard, section 3.9.
    */
-  static long[] utf8Counts(byte[] b) {
+  static long[] utf8Counts(byte[] b, int from, int to) {
     long valid = 0;
     long invalid = 0;
-    int i = 0;
-    while (i < b.length) {
+    int i = from;
+    while (i < to) {
       int c = b[i] & 0xFF;
       if (c < 0x80) {
         i++;
@@ -188,7 +359,7 @@ final class EncodingSniffer {
         i++;
         continue;
       }
-      boolean ok = i + len <= b.length;
+      boolean ok = i + len <= to;
       for (int k = 1; ok && k < len; k++) {
         int t = b[i + k] & 0xFF;
         ok = k == 1 ? t >= lo && t <= hi : t >= 0x80 && t <= 0xBF;
@@ -251,16 +422,19 @@ final class EncodingSniffer {
     if (text != null) {
       return new Decoded(text, label, true, List.of());
     }
+    String replaced = new String(b, offset, b.length - offset, cs);
     return new Decoded(
-        new String(b, offset, b.length - offset, cs),
+        replaced,
         label,
         true,
         List.of(
-            "the file starts with a "
-                + cs.name()
-                + " byte-order mark, but some bytes are not valid "
-                + cs.name()
-                + " and show as \uFFFD; re-export the survey as UTF-8 CSV"));
+            new Warning(
+                TableParser.lineOf(replaced, replaced.indexOf('\uFFFD')),
+                "the file starts with a "
+                    + cs.name()
+                    + " byte-order mark, but some bytes are not valid "
+                    + cs.name()
+                    + " and show as \uFFFD; re-export the survey as UTF-8 CSV")));
   }
 
   private static String tryStrict(byte[] b, int offset, Charset cs) {

@@ -2,22 +2,39 @@ package riffle.ingest;
 
 import java.util.HashSet;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
+import riffle.model.ControlChars;
 
 /**
  * Turns the header record into unique column names: whitespace is trimmed and runs of it (line
  * breaks in a quoted header too) become one space, a blank header becomes {@code Column N} (N the
  * 1-based position), and a name already used (ignoring case) gets {@code " (2)"}, {@code " (3)"} …
- * with a problem reported for it.
+ * with a problem reported for it. A header holding a control character (ESC, C1, bidirectional
+ * overrides) makes the input unusable.
  */
 final class HeaderNames {
   private HeaderNames() {}
 
-  static String[] of(String[] raw, int width, long line, ProblemList problems) {
+  /**
+   * Names the columns.
+   *
+   * @throws BadInput when a header holds a control character (see {@link ControlChars}): a header
+   *     names a question or a segment, and names are refused with one
+   */
+  static String[] of(String[] raw, int width, long line, ProblemList problems) throws BadInput {
     String[] names = new String[width];
     Set<String> used = new HashSet<>();
     for (int i = 0; i < width; i++) {
       String name = i < raw.length ? collapse(raw[i]) : "";
+      Optional<String> unsafe = ControlChars.problem("the header of column " + (i + 1), name);
+      if (unsafe.isPresent()) {
+        throw new BadInput(
+            line,
+            i + 1,
+            unsafe.get()
+                + "; a header names a question or a segment: rename the column in the file");
+      }
       if (name.isEmpty()) {
         name = "Column " + (i + 1);
       }

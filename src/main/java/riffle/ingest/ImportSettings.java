@@ -26,6 +26,13 @@ public final class ImportSettings {
   /** Default {@link #maxProblems()}. */
   public static final int DEFAULT_MAX_PROBLEMS = 200;
 
+  /**
+   * Default {@link #maxColumns()}: 1,000, several times the widest survey exports seen in practice
+   * (a few hundred columns with every matrix item and embedded field), while a file of thousands of
+   * columns would make thousands of questions per row to analyse.
+   */
+  public static final int DEFAULT_MAX_COLUMNS = 1_000;
+
   private final Optional<Delimiter> delimiter;
   private final Optional<Charset> encoding;
   private final List<String> textColumns;
@@ -37,6 +44,7 @@ public final class ImportSettings {
   private final List<String> skippedColumns;
   private final long maxBytes;
   private final int maxProblems;
+  private final int maxColumns;
 
   private ImportSettings(Builder b) {
     this.delimiter = Optional.ofNullable(b.delimiter);
@@ -50,6 +58,7 @@ public final class ImportSettings {
     this.skippedColumns = List.copyOf(b.skippedColumns);
     this.maxBytes = b.maxBytes;
     this.maxProblems = b.maxProblems;
+    this.maxColumns = b.maxColumns;
   }
 
   /** Returns a builder with every option on auto and the default limits. */
@@ -119,6 +128,11 @@ public final class ImportSettings {
     return maxProblems;
   }
 
+  /** Returns the most columns a header may have. */
+  public int maxColumns() {
+    return maxColumns;
+  }
+
   /** Returns each named column with the option that named it, in a fixed option order. */
   Map<String, List<String>> namedColumns() {
     Map<String, List<String>> named = new LinkedHashMap<>();
@@ -144,6 +158,8 @@ public final class ImportSettings {
         + maxBytes
         + ", maxProblems="
         + maxProblems
+        + ", maxColumns="
+        + maxColumns
         + "]";
   }
 
@@ -171,6 +187,7 @@ public final class ImportSettings {
     private final List<String> skippedColumns = new ArrayList<>();
     private long maxBytes = DEFAULT_MAX_BYTES;
     private int maxProblems = DEFAULT_MAX_PROBLEMS;
+    private int maxColumns = DEFAULT_MAX_COLUMNS;
 
     private Builder() {}
 
@@ -262,6 +279,12 @@ public final class ImportSettings {
       return this;
     }
 
+    /** Sets the most columns a header may have; must be positive. */
+    public Builder maxColumns(int maxColumns) {
+      this.maxColumns = maxColumns;
+      return this;
+    }
+
     /**
      * Validates the options together and returns the settings.
      *
@@ -276,6 +299,12 @@ public final class ImportSettings {
       if (maxProblems <= 0) {
         throw new IllegalArgumentException(
             "the number of problems listed must be positive, got " + maxProblems);
+      }
+      if (maxColumns <= 0) {
+        throw new IllegalArgumentException(
+            "the column limit must be positive, got "
+                + maxColumns
+                + "; give --max-columns 1 or more");
       }
       dedupe(textColumns);
       dedupe(codesColumns);

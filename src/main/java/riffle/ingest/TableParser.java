@@ -3,7 +3,10 @@ package riffle.ingest;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
 import riffle.model.ColumnRole;
+import riffle.model.ControlChars;
 
 /**
  * Turns decoded text into a {@link SurveyTable}: delimiter, records, header, the ragged-row policy
@@ -16,7 +19,7 @@ final class TableParser {
       String text,
       String encoding,
       boolean encodingDetected,
-      List<String> warnings,
+      List<EncodingSniffer.Warning> warnings,
       boolean paste) {}
 
   private TableParser() {}
@@ -24,11 +27,11 @@ final class TableParser {
   static SurveyTable parse(Input in, ImportSettings settings) throws BadInput {
     String text = in.text();
     ProblemList problems = new ProblemList(in.source(), settings.maxProblems());
-    for (String w : in.warnings()) {
-      // Decoding warnings either concern replaced bytes (placed at the first replacement) or the
-      // byte-order mark, which is on line 1.
-      long line = w.indexOf('\uFFFD') >= 0 ? lineOf(text, text.indexOf('\uFFFD')) : 1;
-      problems.add(line, 0, w);
+    for (EncodingSniffer.Warning w : in.warnings()) {
+      problems.add(w.line(), 0, w.message());
+    }
+    for (EncodingSniffer.Warning w : EncodingSniffer.doubleEncoded(text)) {
+      problems.add(w.line(), 0, w.message());
     }
     Delimiter excelHint = sepLine(text);
     Delimiter delimiter;
@@ -50,6 +53,19 @@ final class TableParser {
     }
     CsvRecords.Raw header = records.get(h);
     int width = width(header.cells(), records, h);
+    if (width > settings.maxColumns()) {
+      throw new BadInput(
+          header.line(),
+          settings.maxColumns() + 1,
+          String.format(
+              Locale.ROOT,
+              "the header has %,d columns, over the limit of %,d; keep only the columns the"
+                  + " analysis needs (delete the others in the spreadsheet), or raise the limit"
+                  + " with --max-columns %d",
+              width,
+              settings.maxColumns(),
+              width));
+    }
     String[] names = HeaderNames.of(header.cells(), width, header.line(), problems);
     ColumnRole[] named = RoleDetector.named(names, settings, header.line());
 
@@ -106,6 +122,7 @@ final class TableParser {
     }
     List<SurveyRow> sample = rows.subList(0, Math.min(rows.size(), RoleDetector.SAMPLE));
     List<Column> columns = RoleDetector.detect(names, named, sample, header.line());
+    checkCodeNames(columns, rows);
     return new SurveyTable(
         in.source(),
         in.encoding(),
@@ -116,6 +133,28 @@ final class TableParser {
         rows,
         problems.list(),
         ragged + blank - trailingBlank);
+  }
+
+  /** Codes in a codes column become code names, which may not hold a control character. */
+  private static void checkCodeNames(List<Column> columns, List<SurveyRow> rows) throws BadInput {
+    for (Column c : columns) {
+      if (c.role() != ColumnRole.CODES) {
+        continue;
+      }
+      for (SurveyRow r : rows) {
+        for (String code : CodeList.split(r.cell(c))) {
+          Optional<String> unsafe = ControlChars.problem("the code", code);
+          if (unsafe.isPresent()) {
+            throw new BadInput(
+                r.line(),
+                c.index() + 1,
+                unsafe.get()
+                    + "; a code's name is one line of ordinary characters: fix the codes in the"
+                    + " file");
+          }
+        }
+      }
+    }
   }
 
   /**

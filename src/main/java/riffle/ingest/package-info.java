@@ -6,11 +6,12 @@
  * <p>The front door is {@link riffle.ingest.SurveyReader}, configured by {@link
  * riffle.ingest.ImportSettings} and returning a {@link riffle.ingest.SurveyTable}. Behind it, in
  * order: the encoding is sniffed (byte-order mark, UTF-16 NUL pattern, strict UTF-8, else
- * windows-1252) and binary files are refused; the delimiter is sniffed quote-aware over the first
- * records (comma, semicolon, tab, pipe; Excel's {@code sep=;} first line is honoured); Commons CSV
- * splits the records, and an unclosed quote is located by line and field; the first non-blank
- * record is the header; the other records become rows; each column gets a role, named or detected.
- * Cell values are kept verbatim; header names are trimmed.
+ * windows-1252, or line by line when the file mixes UTF-8 and windows-1252 lines) and binary files
+ * are refused; the delimiter is sniffed quote-aware over the first records (comma, semicolon, tab,
+ * pipe; Excel's {@code sep=;} first line is honoured); Commons CSV splits the records, and an
+ * unclosed quote is located by line and field; the first non-blank record is the header; the other
+ * records become rows; each column gets a role, named or detected. Cell values are kept verbatim;
+ * header names are trimmed.
  *
  * <h2>Ragged rows</h2>
  *

@@ -8,7 +8,8 @@ import java.util.Objects;
  * @param answerId the answer's id
  * @param respondent the respondent's id
  * @param wave the wave's name
- * @param text the masked answer ({@code Analysis.masked()}): personal data never shows
+ * @param text the masked answer ({@code Analysis.masked()}): personal data never shows; of a long
+ *     answer only its first {@link ShownText#MAX_CHARS} characters
  */
 public record PhraseExample(long answerId, String respondent, String wave, String text) {
   /** Checks the components. */

@@ -27,4 +27,16 @@ public record RulePreview(
     Objects.requireNonNull(query, "query");
     sample = List.copyOf(sample);
   }
+
+  /** This preview with every sample's text cut to at most {@code max} characters. */
+  public RulePreview shortened(int max) {
+    return new RulePreview(
+        code,
+        query,
+        matches,
+        wouldCode,
+        alreadyCoded,
+        keptOff,
+        sample.stream().map(h -> h.shortened(max)).toList());
+  }
 }

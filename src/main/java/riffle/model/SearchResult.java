@@ -17,4 +17,9 @@ public record SearchResult(int total, Map<String, Integer> waves, List<SearchHit
     waves = Collections.unmodifiableMap(new LinkedHashMap<>(waves));
     hits = List.copyOf(hits);
   }
+
+  /** This result with every hit's text cut to at most {@code max} characters. */
+  public SearchResult shortened(int max) {
+    return new SearchResult(total, waves, hits.stream().map(h -> h.shortened(max)).toList());
+  }
 }

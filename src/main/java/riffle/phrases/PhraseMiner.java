@@ -13,6 +13,7 @@ import riffle.model.Phrase;
 import riffle.model.PhraseCluster;
 import riffle.model.PhraseExample;
 import riffle.model.PhraseReport;
+import riffle.model.ShownText;
 import riffle.stats.BenjaminiHochberg;
 import riffle.stats.ChiSquare;
 import riffle.stats.Keyness;
@@ -257,7 +258,9 @@ public final class PhraseMiner {
       if (out.size() >= settings.examples()) {
         break;
       }
-      String text = d.analysis().masked();
+      String masked = d.analysis().masked();
+      // An example is read at a glance: a long answer gives its start only.
+      String text = masked.substring(0, ShownText.cut(masked, ShownText.MAX_CHARS));
       if (texts.add(text)) {
         out.add(new PhraseExample(d.answerId(), d.respondent(), d.wave(), text));
       }

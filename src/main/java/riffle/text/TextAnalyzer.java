@@ -35,18 +35,19 @@ import riffle.model.Token;
  * sharing them changes nothing.
  *
  * <p>Steps, in order: Unicode NFC; masking ({@link PiiMasker}) of the whole answer; the language
- * check; then, for answers in the analysis language, the first {@link #MAX_ANALYSED_CHARS}
- * characters are split into lines and sentences and each sentence is parsed. A placeholder such as
- * {@code [email]} is one token, tagged as a proper noun.
+ * check of the first {@link #MAX_ANALYSED_CHARS} characters; then, for answers in the analysis
+ * language, those characters are split into lines and sentences and each sentence is parsed. A
+ * placeholder such as {@code [email]} is one token, tagged as a proper noun.
  */
 public final class TextAnalyzer {
   /** The language the English-only steps are for (ISO 639-3). */
   public static final String ANALYSIS_LANGUAGE = "eng";
 
   /**
-   * Answers longer than this are analysed up to here (cut at a space) and flagged truncated;
-   * masking always covers the whole answer. 5,000 characters is about 900 words, far past any
-   * survey answer worth quoting; the cap keeps one pasted essay from stalling an import.
+   * Answers longer than this are analysed up to here (cut at a space) and flagged truncated:
+   * language check and parse read only this prefix; masking always covers the whole answer. 5,000
+   * characters is about 900 words, far past any survey answer worth quoting; the cap keeps one
+   * pasted essay from stalling an import.
    */
   public static final int MAX_ANALYSED_CHARS = 5_000;
 
@@ -125,14 +126,15 @@ public final class TextAnalyzer {
   private Analysis analyzeText(String text) {
     PiiMasker.Masked masked = masker.mask(text);
     String m = masked.text();
-    LanguageCheck.Verdict verdict = languages.get().judge(m);
+    int limit = analysedLength(m);
+    LanguageCheck.Verdict verdict =
+        languages.get().judge(limit < m.length() ? m.substring(0, limit) : m);
     String language = verdict.foreign() ? verdict.language() : ANALYSIS_LANGUAGE;
     Models set = models.get(language);
     if (set == null) {
       return new Analysis(verdict.language(), true, m, masked.masks(), List.of(), false);
     }
     Pipeline pipeline = pipelines.get().computeIfAbsent(language, l -> new Pipeline(set));
-    int limit = analysedLength(m);
     String parseable = substitutePlaceholders(m, masked.masks(), limit);
     List<Sentence> sentences = new ArrayList<>();
     int lineStart = 0;

@@ -16,9 +16,11 @@ import riffle.app.Project;
 import riffle.app.SuggestionTrainer;
 import riffle.model.Code;
 import riffle.model.CodeDraft;
+import riffle.model.ControlChars;
 import riffle.model.Direction;
 import riffle.model.EditOutcome;
 import riffle.model.ShownSuggestion;
+import riffle.model.ShownText;
 import riffle.model.Span;
 import riffle.model.SuggestionReport;
 
@@ -56,6 +58,7 @@ final class CodingRoutes {
     cfg.routes.post("/api/rules/apply", this::applyRules);
     cfg.routes.post("/api/rules/{id}/remove", this::removeRule);
     cfg.routes.get("/api/answers", this::answers);
+    cfg.routes.get("/api/answers/{id}/text", this::answerText);
     cfg.routes.get("/api/assignments", this::assignments);
     cfg.routes.post("/api/assignments", this::assign);
     cfg.routes.post("/api/assignments/remove", this::unassign);
@@ -246,7 +249,9 @@ final class CodingRoutes {
     if (sample < 0 || sample > 50) {
       throw ApiError.badField("sample", "sample must be from 0 to 50, not " + sample);
     }
-    ctx.json(access.call(p -> p.coding().preview(known(p, code), query, sample)));
+    ctx.json(
+        access.call(
+            p -> p.coding().preview(known(p, code), query, sample).shortened(ShownText.MAX_CHARS)));
   }
 
   void applyRules(Context ctx) throws Exception {
@@ -286,7 +291,7 @@ final class CodingRoutes {
         throw ApiError.badParameter(
             "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
       }
-      segments.put(s.substring(0, eq).strip(), s.substring(eq + 1).strip());
+      segments.put(ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
     }
     Optional<Boolean> coded =
         switch (Optional.ofNullable(ctx.queryParam("coded")).orElse("").strip()) {
@@ -315,6 +320,19 @@ final class CodingRoutes {
               }
               return p.answers().page(query);
             }));
+  }
+
+  /** The whole masked text of an answer the page was sent only the start of. */
+  void answerText(Context ctx) throws Exception {
+    long id = idParam(ctx);
+    String text =
+        access.call(
+            p ->
+                p.answers()
+                    .text(id)
+                    .orElseThrow(
+                        () -> ApiError.notFound("there is no answer " + id + " in this project")));
+    ctx.json(Map.of("id", id, "text", text));
   }
 
   void assignments(Context ctx) throws Exception {
@@ -556,7 +574,7 @@ final class CodingRoutes {
     if (c.isEmpty()) {
       throw ApiError.badField("coder", "say who is coding: give your name as coder");
     }
-    if (c.length() > MAX_CODER || c.chars().anyMatch(Character::isISOControl)) {
+    if (c.length() > MAX_CODER || c.chars().anyMatch(ControlChars::breaksName)) {
       throw ApiError.badField(
           "coder", "a coder's name is at most " + MAX_CODER + " characters, on one line");
     }

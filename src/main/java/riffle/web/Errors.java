@@ -1,6 +1,7 @@
 package riffle.web;
 
 import io.javalin.http.Context;
+import io.javalin.http.HttpResponseException;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
@@ -13,7 +14,9 @@ import riffle.model.InputProblem;
  * Turns every failure into one JSON shape, {@code {"error": "...", "where": {...}}}: bad input is
  * 4xx with its message (and, where it has one, the source, line and column); anything unexpected is
  * 500 with a generic message, logged by its type and stack only — never its message, which may
- * quote an answer.
+ * quote an answer. A 500 names no exception class: it would tell the person nothing and a prober
+ * something. Refusals made by Javalin or Jetty before a route runs (a body over the size limit, an
+ * address that cannot be decoded) get the same shape, with a message of ours for their status.
  */
 final class Errors {
   private static final Logger LOG = LoggerFactory.getLogger(Errors.class);
@@ -45,6 +48,9 @@ final class Errors {
       }
       return new Failure(input.located().isPresent() ? 400 : 422, body(message, where));
     }
+    if (e instanceof HttpResponseException h) {
+      return new Failure(h.getStatus(), body(forStatus(h.getStatus()), Map.of()));
+    }
     if (e instanceof IllegalArgumentException) {
       return new Failure(
           400,
@@ -58,11 +64,34 @@ final class Errors {
     return new Failure(
         500,
         body(
-            "something went wrong inside Riffle ("
-                + e.getClass().getSimpleName()
-                + "); nothing"
-                + " was half-written. Try again, and report it if it happens again.",
+            "something went wrong inside Riffle; nothing was half-written. Try again, and report"
+                + " it if it happens again.",
             Map.of()));
+  }
+
+  /**
+   * What to tell the person about a refusal that carries only its HTTP status (one made by Javalin
+   * or Jetty rather than by Riffle's routes).
+   */
+  static String forStatus(int status) {
+    return switch (status) {
+      case 400 ->
+          "the request cannot be read (its address, headers or body are malformed); check the"
+              + " address and send it again";
+      case 413 ->
+          "the request is too large: a JSON body may hold at most "
+              + (WebServer.MAX_JSON >> 20)
+              + " MiB and an upload "
+              + (WebServer.MAX_UPLOAD >> 20)
+              + " MiB; upload a large file with POST /api/uploads, or split it";
+      case 414 -> "the address is too long; shorten the query";
+      case 431 -> "the request's headers are too large; clear the site's cookies and try again";
+      default ->
+          status >= 500
+              ? "something went wrong inside Riffle; nothing was half-written. Try again, and"
+                  + " report it if it happens again."
+              : "the request cannot be served (HTTP " + status + ")";
+    };
   }
 
   /** Answers a request with the failure. */

@@ -1,12 +1,23 @@
 package riffle.web;
 
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
+import java.nio.file.Path;
 import java.time.DateTimeException;
 import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.atomic.AtomicLong;
+import java.util.stream.Stream;
 import riffle.app.ImportReport;
 import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
@@ -16,8 +27,12 @@ import riffle.model.Progress;
 /**
  * Bringing in a wave from the page: uploaded files held until they are imported, the request built
  * from the page's choices, and import jobs that report their progress. Thread-safe.
+ *
+ * <p>An upload is streamed to a file in a private temporary folder as it arrives (never held in
+ * memory), under its own name so that problems and the default wave name read as they would for
+ * {@code riffle import --file}. The folder is deleted by {@link #close}.
  */
-final class Imports {
+final class Imports implements AutoCloseable {
   /** Uploads kept at once; the oldest is dropped first. */
   static final int MAX_UPLOADS = 8;
 
@@ -67,20 +82,131 @@ final class Imports {
       Map<String, Object> error) {}
 
   /** An upload's receipt. */
-  record Upload(String upload, String name, int bytes) {}
+  record Upload(String upload, String name, long bytes) {}
 
-  private final Map<String, ImportSource.Bytes> uploads = new LinkedHashMap<>();
+  /** Longest file name kept, in UTF-8 bytes (file systems allow 255). */
+  static final int MAX_NAME_BYTES = 200;
+
+  private final Path folder;
+  private final long maxBytes;
+  private final Map<String, Path> uploads = new LinkedHashMap<>();
   private final Map<String, JobState> jobs = new LinkedHashMap<>();
   private final AtomicLong ids = new AtomicLong();
 
-  /** Keeps an uploaded file until it is imported or pushed out by newer uploads. */
-  synchronized Upload upload(String name, byte[] bytes) {
-    String id = "u" + ids.incrementAndGet();
-    uploads.put(id, new ImportSource.Bytes(name, bytes));
-    while (uploads.size() > MAX_UPLOADS) {
-      uploads.remove(uploads.keySet().iterator().next());
+  /**
+   * Creates the temporary folder for uploads.
+   *
+   * @param maxBytes the largest upload accepted
+   * @throws UncheckedIOException when the folder cannot be created
+   */
+  Imports(long maxBytes) {
+    this.maxBytes = maxBytes;
+    try {
+      this.folder = Files.createTempDirectory("riffle-uploads-");
+    } catch (IOException e) {
+      throw new UncheckedIOException(
+          "cannot create a temporary folder for uploads (" + e.getMessage() + ")", e);
     }
-    return new Upload(id, name, bytes.length);
+  }
+
+  /**
+   * Streams an uploaded file to disk and keeps it until it is imported or pushed out by newer
+   * uploads (the oldest first).
+   *
+   * @param name the file's name as the browser gave it; only its last path segment is kept
+   * @param body the file's bytes
+   * @throws ApiError 400 for an unusable name, 413 when the file is larger than the limit (nothing
+   *     is kept)
+   * @throws IOException when the body cannot be read or the file written
+   */
+  Upload upload(String name, InputStream body) throws IOException {
+    String fileName = fileName(name);
+    String id = "u" + ids.incrementAndGet();
+    Path dir = Files.createDirectory(folder.resolve(id));
+    Path file;
+    try {
+      file = dir.resolve(fileName);
+    } catch (InvalidPathException e) {
+      delete(dir);
+      throw ApiError.badParameter("name", "the file's name cannot be used here; rename the file");
+    }
+    long total = 0;
+    try (OutputStream out = Files.newOutputStream(file)) {
+      byte[] buffer = new byte[64 * 1024];
+      for (int n = body.read(buffer); n >= 0; n = body.read(buffer)) {
+        total += n;
+        if (total > maxBytes) {
+          throw tooLarge(maxBytes);
+        }
+        out.write(buffer, 0, n);
+      }
+    } catch (IOException | RuntimeException e) {
+      delete(dir);
+      throw e;
+    }
+    List<Path> dropped = new ArrayList<>();
+    synchronized (this) {
+      uploads.put(id, file);
+      while (uploads.size() > MAX_UPLOADS) {
+        String oldest = uploads.keySet().iterator().next();
+        dropped.add(uploads.remove(oldest).getParent());
+      }
+    }
+    dropped.forEach(Imports::delete);
+    return new Upload(id, fileName, total);
+  }
+
+  /** The temporary folder the uploads are written to. */
+  Path folder() {
+    return folder;
+  }
+
+  /** The refusal of an upload over {@code maxBytes}. */
+  static ApiError tooLarge(long maxBytes) {
+    return new ApiError(
+        413,
+        "the file is larger than "
+            + (maxBytes >> 20)
+            + " MiB; split it, or import it with riffle import --file (and --max-mb)");
+  }
+
+  /** The last path segment of a browser's file name, checked to be a plain file name. */
+  static String fileName(String name) {
+    String n = name.strip();
+    n = n.substring(Math.max(n.lastIndexOf('/'), n.lastIndexOf('\\')) + 1).strip();
+    if (n.isEmpty() || n.equals(".") || n.equals("..")) {
+      throw ApiError.badParameter("name", "give the file's name as ?name=, such as wave-3.csv");
+    }
+    if (n.codePoints().anyMatch(c -> Character.isISOControl(c) || c == ':')) {
+      throw ApiError.badParameter(
+          "name", "the file's name holds a control character or a colon; rename the file");
+    }
+    if (n.getBytes(StandardCharsets.UTF_8).length > MAX_NAME_BYTES) {
+      throw ApiError.badParameter("name", "the file's name is too long; rename the file");
+    }
+    return n;
+  }
+
+  /** Deletes every upload still held and the folder; later uploads fail. */
+  @Override
+  public void close() {
+    synchronized (this) {
+      uploads.clear();
+    }
+    delete(folder);
+  }
+
+  private static void delete(Path path) {
+    if (!Files.exists(path)) {
+      return;
+    }
+    try (Stream<Path> all = Files.walk(path)) {
+      for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
+        Files.deleteIfExists(p);
+      }
+    } catch (IOException e) {
+      // A temporary file left behind is removed by the system's temporary-folder cleaning.
+    }
   }
 
   /**
@@ -95,13 +221,15 @@ final class Imports {
     }
     ImportSource source;
     if (s.upload() != null) {
+      Path file;
       synchronized (this) {
-        source = uploads.get(s.upload());
+        file = uploads.get(s.upload());
       }
-      if (source == null) {
+      if (file == null) {
         throw ApiError.notFound(
             "the uploaded file " + s.upload() + " is no longer held; choose the file again");
       }
+      source = new ImportSource.File(file);
     } else {
       if (s.paste().isBlank()) {
         throw ApiError.badField("paste", "nothing was pasted; paste the cells, header row first");
@@ -123,7 +251,11 @@ final class Imports {
       if (s.wave().isBlank()) {
         throw ApiError.badField("wave", "the wave needs a name");
       }
-      b.wave(s.wave().strip());
+      try {
+        b.wave(s.wave().strip());
+      } catch (IllegalArgumentException e) {
+        throw ApiError.badField("wave", e.getMessage());
+      }
     }
     if (s.date() != null && !s.date().isBlank()) {
       try {

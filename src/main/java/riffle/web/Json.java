@@ -61,16 +61,18 @@ final class Json {
   /**
    * Reads the request body as {@code type}.
    *
+   * @return the body, never null
    * @throws ApiError 400 naming the line and column of malformed JSON, or the field that is unknown
-   *     or of the wrong kind
+   *     or of the wrong kind; 400 for a body that is the JSON value {@code null}
    */
   static <T> T body(Context ctx, Class<T> type) {
     String body = ctx.body();
     if (body.isBlank()) {
       throw new ApiError(400, "the request has no JSON body; send a JSON object");
     }
+    T value;
     try {
-      return MAPPER.readValue(body, type);
+      value = MAPPER.readValue(body, type);
     } catch (UnrecognizedPropertyException e) {
       String known =
           e.getKnownPropertyIds() == null
@@ -116,6 +118,10 @@ final class Json {
               + "; send a JSON object",
           where);
     }
+    if (value == null) {
+      throw new ApiError(400, "the request body is null; send a JSON object");
+    }
+    return value;
   }
 
   private static String path(JsonMappingException e) {

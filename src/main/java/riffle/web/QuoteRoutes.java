@@ -52,7 +52,7 @@ final class QuoteRoutes {
         throw ApiError.badParameter(
             "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
       }
-      segments.put(s.substring(0, eq).strip(), s.substring(eq + 1).strip());
+      segments.put(ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
     }
     QuoteQuery query = new QuoteQuery(text(ctx, "code"), text(ctx, "wave"), segments);
     ctx.json(access.call(p -> p.quotes().rank(query)));

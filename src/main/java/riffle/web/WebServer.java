@@ -3,8 +3,11 @@ package riffle.web;
 import io.javalin.Javalin;
 import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
+import io.javalin.http.HttpResponseException;
 import io.javalin.http.staticfiles.Location;
 import io.javalin.json.JavalinJackson;
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.net.URI;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -20,6 +23,7 @@ import riffle.app.ImportRequest;
 import riffle.app.PhraseQuery;
 import riffle.app.SuggestionTrainer;
 import riffle.model.InputException;
+import riffle.model.ShownText;
 
 /**
  * Serves one project to the browser: the JSON API under {@code /api/} and the page from {@code
@@ -30,6 +34,12 @@ import riffle.model.InputException;
 public final class WebServer implements AutoCloseable {
   /** Largest upload accepted, as the importer's own limit (100 MiB). */
   static final long MAX_UPLOAD = 100L << 20;
+
+  /**
+   * Largest JSON body accepted (16 MiB): enough for cells pasted from a spreadsheet; a larger table
+   * comes as an upload, which is streamed to disk.
+   */
+  static final long MAX_JSON = 16L << 20;
 
   /** Largest number of answers one search returns. */
   static final int MAX_HITS = 500;
@@ -92,16 +102,19 @@ public final class WebServer implements AutoCloseable {
   private final URI url;
   private final Optional<String> token;
   private final SuggestionTrainer trainer;
+  private final Imports imports;
 
   private WebServer(
       Javalin app,
       ProjectAccess access,
       SuggestionTrainer trainer,
+      Imports imports,
       URI url,
       Optional<String> token) {
     this.app = app;
     this.access = access;
     this.trainer = trainer;
+    this.imports = imports;
     this.url = url;
     this.token = token;
   }
@@ -125,7 +138,13 @@ public final class WebServer implements AutoCloseable {
             : Optional.empty();
     Guard guard = new Guard(options.host(), token);
     ProjectAccess access = ProjectAccess.open(project, options.waitMillis());
-    Imports imports = new Imports();
+    Imports imports;
+    try {
+      imports = new Imports(MAX_UPLOAD);
+    } catch (UncheckedIOException e) {
+      access.close();
+      throw new IllegalStateException(e.getMessage(), e);
+    }
     SuggestionTrainer trainer = new SuggestionTrainer(project);
     CodingRoutes coding = new CodingRoutes(access, trainer);
     QuoteRoutes quotes = new QuoteRoutes(access);
@@ -137,6 +156,7 @@ public final class WebServer implements AutoCloseable {
               .start();
     } catch (RuntimeException e) {
       trainer.close();
+      imports.close();
       access.close();
       throw new IllegalStateException(
           "cannot listen on " + options.host() + ":" + options.port() + " (" + e.getMessage() + ")",
@@ -145,7 +165,12 @@ public final class WebServer implements AutoCloseable {
     guard.bound(app.port());
     String host = options.host().contains(":") ? "[" + options.host() + "]" : options.host();
     return new WebServer(
-        app, access, trainer, URI.create("http://" + host + ":" + app.port() + "/"), token);
+        app,
+        access,
+        trainer,
+        imports,
+        URI.create("http://" + host + ":" + app.port() + "/"),
+        token);
   }
 
   private static String newToken() {
@@ -165,7 +190,8 @@ public final class WebServer implements AutoCloseable {
     cfg.startup.showOldJavalinVersionWarning = false;
     cfg.jetty.host = options.host();
     cfg.jetty.port = options.port();
-    cfg.http.maxRequestSize = MAX_UPLOAD + (1 << 20);
+    cfg.http.maxRequestSize = MAX_JSON;
+    cfg.jetty.modifyServer(server -> server.setErrorHandler(new ErrorPages()));
     cfg.jsonMapper(new JavalinJackson(Json.MAPPER, false));
     cfg.staticFiles.add(
         sf -> {
@@ -191,6 +217,7 @@ public final class WebServer implements AutoCloseable {
     coding.register(cfg);
     quotes.register(cfg);
     cfg.routes.exception(Exception.class, Errors::answer);
+    cfg.routes.exception(HttpResponseException.class, WebServer::refused);
     cfg.routes.error(
         404,
         ctx -> {
@@ -208,6 +235,18 @@ public final class WebServer implements AutoCloseable {
             ctx.json(Errors.body(ctx.method() + " is not allowed on " + ctx.path(), Map.of()));
           }
         });
+  }
+
+  /**
+   * Answers a refusal Javalin made itself (a body over {@link #MAX_JSON}, an unknown route): in the
+   * API's shape; unknown routes and methods are worded by the error mappers, which know the path.
+   */
+  private static void refused(HttpResponseException e, Context ctx) {
+    if (e.getStatus() == 404 || e.getStatus() == 405) {
+      ctx.status(e.getStatus());
+      return;
+    }
+    Errors.answer(e, ctx);
   }
 
   private static boolean isJson(Context ctx) {
@@ -235,6 +274,7 @@ public final class WebServer implements AutoCloseable {
   public void close() {
     app.stop();
     trainer.close();
+    imports.close();
     access.close();
   }
 
@@ -259,17 +299,16 @@ public final class WebServer implements AutoCloseable {
               }));
     }
 
-    void upload(Context ctx) {
+    /** Streams the body to a temporary file; one declared over the limit is refused unread. */
+    void upload(Context ctx) throws IOException {
       String name = Optional.ofNullable(ctx.queryParam("name")).orElse("").strip();
       if (name.isEmpty()) {
         throw ApiError.badParameter("name", "give the file's name as ?name=");
       }
-      byte[] bytes = ctx.bodyAsBytes();
-      if (bytes.length > MAX_UPLOAD) {
-        throw new ApiError(
-            413, "the file is larger than 100 MiB; split it, or import it with riffle import");
+      if (ctx.req().getContentLengthLong() > MAX_UPLOAD) {
+        throw Imports.tooLarge(MAX_UPLOAD);
       }
-      ctx.status(201).json(imports.upload(name, bytes));
+      ctx.status(201).json(imports.upload(name, ctx.bodyInputStream()));
     }
 
     void preview(Context ctx) throws Exception {
@@ -310,7 +349,7 @@ public final class WebServer implements AutoCloseable {
         throw ApiError.badParameter("q", "write a query, such as delivery or \"delivery date\"");
       }
       int limit = intParam(ctx, "limit", 50, 1, MAX_HITS);
-      ctx.json(access.call(p -> p.search(q, limit)));
+      ctx.json(access.call(p -> p.search(q, limit)).shortened(ShownText.MAX_CHARS));
     }
 
     void similar(Context ctx) throws Exception {
@@ -328,7 +367,7 @@ public final class WebServer implements AutoCloseable {
                 if (!p.answerIds().contains(id)) {
                   throw ApiError.notFound("there is no answer " + id + " in this project");
                 }
-                return p.similar(id, limit);
+                return p.similar(id, limit).shortened(ShownText.MAX_CHARS);
               }));
     }
 
@@ -340,7 +379,8 @@ public final class WebServer implements AutoCloseable {
           throw ApiError.badParameter(
               "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
         }
-        segments.put(s.substring(0, eq).strip(), s.substring(eq + 1).strip());
+        segments.put(
+            ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
       }
       PhraseQuery query;
       try {

@@ -105,6 +105,7 @@ class GoldenFixturesTest {
       case "meta-column" -> b.metaColumn(value);
       case "max-bytes" -> b.maxBytes(Long.parseLong(value));
       case "max-problems" -> b.maxProblems(Integer.parseInt(value));
+      case "max-columns" -> b.maxColumns(Integer.parseInt(value));
       default -> throw new IllegalArgumentException("unknown fixture option " + key);
     }
   }

@@ -19,6 +19,7 @@ class ImportSettingsTest {
     assertEquals(Optional.empty(), s.idColumn());
     assertEquals(100L * 1024 * 1024, s.maxBytes());
     assertEquals(200, s.maxProblems());
+    assertEquals(1_000, s.maxColumns());
   }
 
   @Test
@@ -98,6 +99,11 @@ class ImportSettingsTest {
     assertThrows(
         IllegalArgumentException.class, () -> ImportSettings.builder().maxProblems(0).get());
     assertEquals(1, ImportSettings.builder().maxProblems(1).get().maxProblems());
+    IllegalArgumentException columns =
+        assertThrows(
+            IllegalArgumentException.class, () -> ImportSettings.builder().maxColumns(0).get());
+    assertTrue(columns.getMessage().contains("--max-columns"), columns.getMessage());
+    assertEquals(5_000, ImportSettings.builder().maxColumns(5_000).get().maxColumns());
   }
 
   @Test

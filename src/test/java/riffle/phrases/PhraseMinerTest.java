@@ -140,6 +140,24 @@ class PhraseMinerTest {
   }
 
   @Test
+  void aLongAnswerGivesOnlyItsStartAsAnExample() {
+    String tail = " and the warranty card was missing".repeat(400);
+    List<PhraseDoc> longOnes =
+        new Answers.Builder()
+            .add(1, "The tamper was missing from the box" + tail)
+            .add(1, "Again the tamper was missing from the box" + tail)
+            .build();
+    PhraseReport report = MINER.mine(longOnes, PhraseFilter.all());
+    assertFalse(report.phrases().isEmpty());
+    for (Phrase p : report.phrases()) {
+      for (PhraseExample e : p.examples()) {
+        String whole = longOnes.get((int) e.answerId() - 1).analysis().masked();
+        assertEquals(whole.substring(0, riffle.model.ShownText.MAX_CHARS), e.text());
+      }
+    }
+  }
+
+  @Test
   void limitKeepsTheBestPhrases() {
     PhraseReport all = MINER.mine(docs, PhraseFilter.all());
     PhraseMiner three =

@@ -135,6 +135,22 @@ class TextAnalyzerTest {
   }
 
   @Test
+  void theLanguageOfALongAnswerIsJudgedOnItsAnalysedStart() {
+    // English first, then far more German: the verdict (like the parse) reads only the start,
+    // while masking still covers the whole answer.
+    String text =
+        "The grinder arrived late and the box was damaged, so I almost cancelled. ".repeat(70)
+            + "Die Lieferung war sehr langsam und der Kundendienst hat nie geantwortet. "
+                .repeat(2_000)
+            + "Schreib mir an anna.k@example.com";
+    Analysis a = ANALYZER.analyze(text);
+    assertTrue(a.truncated());
+    assertEquals(TextAnalyzer.ANALYSIS_LANGUAGE, a.language());
+    assertFalse(a.foreign());
+    assertTrue(a.masked().endsWith("[email]"), "masking reads the whole answer");
+  }
+
+  @Test
   void manyAnswersOnAllCoresMatchOneByOne() {
     Random random = new Random(11);
     List<String> answers = new ArrayList<>();

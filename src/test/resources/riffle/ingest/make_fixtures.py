@@ -151,3 +151,27 @@ with open("binary.xlsx", "wb") as f:
     f.write(b"PK\x03\x04" + bytes(rnd.randrange(256) for _ in range(600)))
 with open("binary-controls.dat", "wb") as f:
     f.write(bytes(rnd.choice([1, 2, 3, 7, 8, 14, 27, 31, 65, 66, 44, 10]) for _ in range(800)))
+
+# Two exports concatenated: the UTF-8 one (English, a few accents) and a windows-1252 one
+# (French, many accents), so that stray bytes outnumber UTF-8 sequences; CRLF line ends.
+mixed_utf8 = f"""id,{Q1},country
+M1,The café in the photos looked nothing like my kitchen,IE
+M2,Whether the 58 mm tamper fits – the page did not say,IE
+M3,Shipping to Köln took nine days,DE
+"""
+mixed_1252 = """M4,Le délai de livraison était trop long pour une machine déjà révisée,FR
+M5,Très bon rapport qualité-prix mais la crème était décevante,FR
+"""
+mixed_tail = """M6,Delivery was quick and the grinder arrived well packed,NL
+"""
+with open("mixed-utf8-windows-1252.csv", "wb") as f:
+    f.write(mixed_utf8.replace("\n", "\r\n").encode("utf-8"))
+    f.write(mixed_1252.replace("\n", "\r\n").encode("cp1252"))
+    f.write(mixed_tail.replace("\n", "\r\n").encode("utf-8"))
+
+# UTF-8 text that was decoded as windows-1252 somewhere before this export (double-encoded).
+write("double-encoded.csv", f"""id,{Q1}
+D1,"CafÃ© crÃ¨me was what I wanted, and the machine makes it"
+D2,The grinder was fine and arrived on time
+D3,The manual said 9Â bar but the gauge showed 12 â€“ which is right?
+""")
