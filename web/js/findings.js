@@ -137,7 +137,24 @@ function sentence(c) {
 /** "read 112 of 580 (19%)" */
 function coverage(c) {
   const share = c.read > 0 && c.share < 0.005 ? '<1%' : `${Math.round(c.share * 100)}%`;
-  return `read ${count(c.read)} of ${count(c.answers)} (${share})`;
+  const sample = c.sample === 'random' ? ', a random sample' : c.sample === 'not_random' ? ', not a random sample' : '';
+  return `read ${count(c.read)} of ${count(c.answers)} (${share})${sample}`;
+}
+
+/** What partial readings allow (the same words as the reports). */
+function caution(q) {
+  const samples = Object.values(q.coverage || {}).map((c) => c.sample);
+  const random = samples.includes('random');
+  const other = samples.includes('not_random');
+  if (random && other) return 'Where the answers read are a random sample, shares are projected to the wave; elsewhere they describe the answers read only, and changes compare those.';
+  if (random) return 'The answers read are a random sample: shares are projected to the wave.';
+  if (other) return 'The answers read are not a random sample of the wave (choose “Random order (sample)” when coding to make one): shares describe the answers read only, are not projected to the wave, and changes compare those.';
+  return null;
+}
+
+/** "about 536 of 5,000 in the wave (300–850)" */
+function projection(p) {
+  return `about ${count(Math.round(p.count))} of ${count(p.population)} in the wave (${count(p.lower)}–${count(p.upper)})`;
 }
 
 function coverageLine(q) {
@@ -158,6 +175,7 @@ function questionFindings(q, index) {
     { class: 'panel findings', 'aria-labelledby': id },
     h('h2', { id }, q.question),
     h('p', { class: 'meta coverage', id: `${id}-coverage` }, 'Answers read by a person: ', coverageLine(q)),
+    caution(q) ? h('p', { class: 'hint', id: `${id}-sample` }, caution(q)) : null,
     q.not_coded && q.not_coded.length > 0
       ? h('p', { class: 'hint' }, `No answer read by a person yet in ${q.not_coded.join(', ')}: codes given by hand have no share there.`)
       : null,
@@ -234,12 +252,14 @@ function shareChart(c, waves) {
     if (path.length > 1) chart.insertBefore(svg('path', { d: path.join(' '), class: kind === 'rule' ? 'trend rule' : 'trend' }), chart.firstChild);
   }
   const flags = [];
+  const projected = [];
   for (const w of waves) {
     const s = c.waves[w];
     if (!s) {
       if (c.no_share && c.no_share[w]) flags.push(`no share in ${w}: ${c.no_share[w]}`);
       continue;
     }
+    if (s.projected) projected.push(`${w}: ${projection(s.projected)}`);
     if (s.small_base) flags.push(`small base in ${w} (${s.base})`);
     else if (s.imprecise) flags.push(`imprecise in ${w}`);
   }
@@ -250,6 +270,7 @@ function shareChart(c, waves) {
     h('figcaption', {}, c.parent ? `${c.parent} \u203a ` : '', h('strong', {}, c.code), c.by_rule ? ' (by rule)' : '', last ? ` \u00b7 ${pct(last.share)} in the latest wave with a share (${last.count} of ${last.base} ${last.by_rule ? 'by rule' : 'read'})` : ''),
     chart,
     flags.length ? h('p', { class: 'flags' }, flags.join('; ')) : null,
+    projected.length ? h('p', { class: 'hint projected' }, projected.join('; ')) : null,
   );
 }
 

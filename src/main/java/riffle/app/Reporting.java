@@ -107,7 +107,22 @@ public final class Reporting {
               byRule));
     }
     return Report.compute(
-        new ReportInput(l.questions, l.waves, codebook(l.codes), answers), settings);
+        new ReportInput(l.questions, l.waves, codebook(l.codes), answers, randomSamples()),
+        settings);
+  }
+
+  /**
+   * Per question, the waves whose read answers are a random sample of the wave's: the first k of a
+   * review queue of the whole wave (a queue of one segment samples that segment, not the wave).
+   */
+  private Map<String, Set<String>> randomSamples() throws InputException {
+    Map<String, Set<String>> out = new HashMap<>();
+    for (QueueStatus s : new ReviewQueues(store).all()) {
+      if (s.queue().segment().isEmpty() && s.sample().random()) {
+        out.computeIfAbsent(s.queue().question(), q -> new HashSet<>()).add(s.queue().wave());
+      }
+    }
+    return out;
   }
 
   /** The findings as one self-contained HTML page. */

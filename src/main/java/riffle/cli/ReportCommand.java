@@ -120,6 +120,10 @@ final class ReportCommand implements Callable<Integer> {
     out.println(
         read.substring(0, read.length() - 1)
             + (nonAnswers > 0 ? " (" + nonAnswers + " non-answers counted nowhere)" : ""));
+    String caution = Coverage.caution(q.coverage().values());
+    if (!caution.isEmpty()) {
+      out.println("  " + caution.substring(2));
+    }
     if (!q.notCoded().isEmpty()) {
       out.println(
           "  No answer read by a person yet in "
@@ -188,7 +192,8 @@ final class ReportCommand implements Callable<Integer> {
   /** "read 112 of 580 (19%)". */
   static String coverage(Coverage c) {
     return String.format(
-        Locale.ROOT, "read %d of %d (%.0f%%)", c.read(), c.answers(), 100 * c.share());
+            Locale.ROOT, "read %d of %d (%.0f%%)", c.read(), c.answers(), 100 * c.share())
+        + c.sampleNote();
   }
 
   private static void shares(
@@ -224,6 +229,7 @@ final class ReportCommand implements Callable<Integer> {
                 s.base(),
                 (s.smallBase() ? "*" : "") + (s.imprecise() ? "~" : ""),
                 s.byRule() && !f.byRule() ? " by rule" : ""));
+        s.projected().ifPresent(p -> line.append(" → ").append(p.describe()));
       }
       out.println(line);
     }

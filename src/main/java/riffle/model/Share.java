@@ -1,6 +1,7 @@
 package riffle.model;
 
 import java.util.Objects;
+import java.util.Optional;
 
 /**
  * How many answers of one wave carry a code, out of the wave's base.
@@ -14,6 +15,8 @@ import java.util.Objects;
  * @param imprecise whether the interval is wider than 20 percentage points
  * @param byRule whether the code is given only by rules here, so the share counts what its rules
  *     found, over the answers they ran on, and no person's reading
+ * @param projected the count it projects for the whole wave, when the answers read are a random
+ *     sample of the wave (never for a share by rule or of a wave read in full)
  */
 public record Share(
     int count,
@@ -22,10 +25,12 @@ public record Share(
     ConfidenceInterval ci,
     boolean smallBase,
     boolean imprecise,
-    boolean byRule) {
+    boolean byRule,
+    Optional<ProjectedCount> projected) {
   /** Checks the components. */
   public Share {
     Objects.requireNonNull(ci, "ci");
+    Objects.requireNonNull(projected, "projected");
     if (count < 0 || base < count) {
       throw new IllegalArgumentException("need 0 <= count <= base, got " + count + "/" + base);
     }

@@ -10,6 +10,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import java.util.Set;
 import java.util.TreeMap;
 import riffle.model.CodeFrequency;
 import riffle.model.ConfidenceInterval;
@@ -17,6 +18,7 @@ import riffle.model.Cooccurrence;
 import riffle.model.Coverage;
 import riffle.model.Findings;
 import riffle.model.NotCompared;
+import riffle.model.ProjectedCount;
 import riffle.model.QuestionFindings;
 import riffle.model.Saturation;
 import riffle.model.SaturationPoint;
@@ -25,6 +27,7 @@ import riffle.model.Share;
 import riffle.model.WaveChange;
 import riffle.stats.BenjaminiHochberg;
 import riffle.stats.Chao1;
+import riffle.stats.FinitePopulation;
 import riffle.stats.FisherExact;
 import riffle.stats.Interval;
 import riffle.stats.Proportions;
@@ -112,10 +115,27 @@ public final class Report {
     List<QuestionFindings> questions = new ArrayList<>();
     for (Map.Entry<String, List<ReportAnswer>> e : byQuestion.entrySet()) {
       questions.add(
-          new Question(e.getKey(), e.getValue(), codebook, waves, waveIndex, ruleRan, settings)
+          new Question(
+                  e.getKey(),
+                  e.getValue(),
+                  codebook,
+                  waves,
+                  waveIndex,
+                  ruleRan,
+                  random(waves, input.randomSamples().getOrDefault(e.getKey(), Set.of())),
+                  settings)
               .findings(chosen));
     }
     return new Findings(questions);
+  }
+
+  /** Which waves' read answers are a random sample, by wave index. */
+  private static boolean[] random(List<String> waves, Set<String> sampled) {
+    boolean[] out = new boolean[waves.size()];
+    for (int w = 0; w < out.length; w++) {
+      out[w] = sampled.contains(waves.get(w));
+    }
+    return out;
   }
 
   private static Map<String, Integer> index(List<String> values) {
@@ -172,6 +192,10 @@ public final class Report {
     final List<String> allWaves;
     final Map<String, Integer> allIndex;
     final boolean[][] ruleRan;
+
+    /** Whether the answers read in a wave are a random sample of its answers to the question. */
+    final boolean[] random;
+
     final ReportSettings settings;
     final Tally tally;
 
@@ -185,8 +209,10 @@ public final class Report {
         List<String> allWaves,
         Map<String, Integer> allIndex,
         boolean[][] ruleRan,
+        boolean[] random,
         ReportSettings settings) {
       this.question = question;
+      this.random = random;
       this.answers = answers;
       this.codebook = codebook;
       this.allWaves = allWaves;
@@ -215,7 +241,7 @@ public final class Report {
           notCoded.add(allWaves.get(w));
         }
         if (tally.answers[w] + tally.nonAnswers[w] > 0) {
-          coverage.put(allWaves.get(w), tally.coverage(w));
+          coverage.put(allWaves.get(w), tally.coverage(w, random[w]));
         }
       }
       // Only codes given to some answer of this question are reported for it (a codebook serves
@@ -272,9 +298,12 @@ public final class Report {
       Share[] out = new Share[codebook.size()];
       for (int i = 0; i < out.length; i++) {
         if (tally.human[i] && t.read[w] > 0) {
-          out[i] = share(t.count[w][i], t.read[w], false);
+          // A random sample of the wave, cut to a segment, is a random sample of the segment's
+          // answers (Cochran 1977 §2.13, domains of study), so segments are projected too.
+          boolean project = random[w] && t.read[w] < t.answers[w];
+          out[i] = share(t.count[w][i], t.read[w], false, project ? t.answers[w] : 0);
         } else if (ruleRan[w][i] && t.answers[w] > 0) {
-          out[i] = share(t.all[w][i], t.answers[w], true);
+          out[i] = share(t.all[w][i], t.answers[w], true, 0);
         }
       }
       return out;
@@ -558,7 +587,7 @@ public final class Report {
         Map<String, Coverage> coverage = new LinkedHashMap<>();
         for (int w : shown) {
           shares[w] = shares(t, w);
-          coverage.put(allWaves.get(w), t.coverage(w));
+          coverage.put(allWaves.get(w), t.coverage(w, random[w]));
         }
         rows.add(
             new SegmentFindings(
@@ -584,11 +613,28 @@ public final class Report {
 
   /** A share with its Wilson interval and flags, over read answers (package-private for tests). */
   static Share share(int count, int base) {
-    return share(count, base, false);
+    return share(count, base, false, 0);
   }
 
-  static Share share(int count, int base, boolean byRule) {
+  /**
+   * A share with its Wilson interval and flags; with a {@code population} above the base (the base
+   * then being a random sample of it), the count it projects for the whole wave as well.
+   */
+  static Share share(int count, int base, boolean byRule, int population) {
     Interval ci = Proportions.wilson(count, base);
+    Optional<ProjectedCount> projected =
+        population > base
+            ? FinitePopulation.project(count, base, population)
+                .map(
+                    p ->
+                        new ProjectedCount(
+                            population,
+                            base,
+                            p.projected(),
+                            p.lower(),
+                            p.upper(),
+                            interval(p.interval())))
+            : Optional.empty();
     return new Share(
         count,
         base,
@@ -596,7 +642,8 @@ public final class Report {
         interval(ci),
         base < SMALL_BASE,
         ci.width() > IMPRECISE_WIDTH,
-        byRule);
+        byRule,
+        projected);
   }
 
   private static ConfidenceInterval interval(Interval ci) {
@@ -675,8 +722,8 @@ public final class Report {
       return false;
     }
 
-    Coverage coverage(int wave) {
-      return Coverage.of(read[wave], answers[wave], nonAnswers[wave]);
+    Coverage coverage(int wave, boolean random) {
+      return Coverage.of(read[wave], answers[wave], nonAnswers[wave], random);
     }
 
     void add(ReportAnswer a, int wave, boolean perWave) {

@@ -55,15 +55,25 @@ final class Text {
     return percent(s.share()) + " (" + range(s.ci()) + ")" + (s.byRule() ? " by rule" : "");
   }
 
-  /** A share's count and base: "12 of 112 read", or "12 of 580 by rule". */
+  /**
+   * A share's count and base: "12 of 112 read", or "12 of 580 by rule"; from a random sample, with
+   * the count it projects: "12 of 112 read; about 536 of 5000 in the wave (300–850)".
+   */
   static String counts(Share s) {
-    return s.count() + " of " + s.base() + (s.byRule() ? " by rule" : " read");
+    return s.count()
+        + " of "
+        + s.base()
+        + (s.byRule() ? " by rule" : " read")
+        + s.projected().map(p -> "; " + p.describe()).orElse("");
   }
 
-  /** How much of a wave a person read: "read 112 of 580 (19%)". */
+  /**
+   * How much of a wave a person read and what it stands for: "read 112 of 580 (19%), a random
+   * sample" or "read 112 of 580 (19%), not a random sample".
+   */
   static String coverage(Coverage c) {
     String pct = c.read() > 0 && c.share() < 0.005 ? "<1%" : percent(c.share());
-    return "read " + c.read() + " of " + c.answers() + " (" + pct + ")";
+    return "read " + c.read() + " of " + c.answers() + " (" + pct + ")" + c.sampleNote();
   }
 
   /** Coverage per wave on one line: "Spring read 112 of 580 (19%) · Summer read 0 of 600 (0%)". */
@@ -79,7 +89,7 @@ final class Text {
       line +=
           " (" + nonAnswers + " non-answer" + (nonAnswers == 1 ? "" : "s") + " counted nowhere)";
     }
-    return line;
+    return line + Coverage.caution(q.coverage().values());
   }
 
   /** Escapes project text for one output format. */

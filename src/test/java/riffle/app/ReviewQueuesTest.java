@@ -235,4 +235,54 @@ class ReviewQueuesTest {
       assertEquals(List.of(s.queue()), p.queues().all().stream().map(QueueStatus::queue).toList());
     }
   }
+
+  /**
+   * Findings from a random sample: the first 12 of the 36 substantive answers in the queue's order
+   * are read (every third carries "Fit"), so the wave's share is projected with the
+   * finite-population interval of {@code riffle.stats.FinitePopulation} (checked there against
+   * Cochran 1977); one answer read outside the order ends the projection and the findings say the
+   * reading is not a random sample.
+   */
+  @Test
+  void findingsProjectARandomSampleToTheWaveAndStopWhenAnAnswerIsReadOutsideTheOrder()
+      throws Exception {
+    try (Project p = Project.openExisting(project)) {
+      QueueKey key = QueueKey.of("Wave 1", "1");
+      p.queues().start("ana", key, OptionalLong.of(7));
+      long[] order = ReviewOrder.order(7, substantive(p));
+      Code fit = p.coding().create("ana", CodeDraft.named("Fit"));
+      for (int i = 0; i < 12; i++) {
+        if (i % 3 == 0) {
+          p.coding().assign("ana", order[i], fit.id(), Optional.empty());
+        } else {
+          p.coding().markRead("ana", order[i]);
+        }
+      }
+      var q = p.reporting().findings(FindingsQuery.ALL).questions().get(0);
+      var coverage = q.coverage().get("Wave 1");
+      assertEquals(riffle.model.Coverage.RANDOM, coverage.sample());
+      assertEquals(12, coverage.read());
+      var share = q.codes().get(0).waves().get("Wave 1");
+      assertEquals(4, share.count());
+      assertEquals(12, share.base());
+      var projected = share.projected().orElseThrow();
+      assertEquals(36, projected.population());
+      assertEquals(12.0, projected.count(), 1e-9, "36 × 4/12");
+      var expected = riffle.stats.FinitePopulation.project(4, 12, 36).orElseThrow();
+      assertEquals(expected.lower(), projected.lower());
+      assertEquals(expected.upper(), projected.upper());
+      assertTrue(projected.lower() >= 4 && projected.upper() <= 4 + 24, "inside what can be");
+      String text = p.reporting().markdown(p.reporting().findings(FindingsQuery.ALL), "t");
+      assertTrue(text.contains("a random sample"), text);
+      assertTrue(text.contains("about 12 of 36 in the wave"), text);
+
+      p.coding().markRead("ana", order[30]);
+      q = p.reporting().findings(FindingsQuery.ALL).questions().get(0);
+      assertEquals(riffle.model.Coverage.NOT_RANDOM, q.coverage().get("Wave 1").sample());
+      assertTrue(q.codes().get(0).waves().get("Wave 1").projected().isEmpty());
+      text = p.reporting().markdown(p.reporting().findings(FindingsQuery.ALL), "t");
+      assertTrue(text.contains("not a random sample"), text);
+      assertFalse(text.contains("in the wave ("), text);
+    }
+  }
 }
