@@ -3,18 +3,23 @@ package riffle.app;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
+import java.util.TreeSet;
 import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.Code;
+import riffle.model.Coverage;
 import riffle.model.Findings;
 import riffle.model.InputException;
 import riffle.model.Origin;
+import riffle.model.QuestionFindings;
+import riffle.model.SegmentFindings;
 import riffle.report.CodedExport;
 import riffle.report.ExportAnswer;
 import riffle.report.ExportAssignment;
@@ -66,7 +71,69 @@ public final class Reporting {
    *     lacks
    */
   public Findings findings(FindingsQuery query) throws InputException {
-    Loaded l = load(query.question());
+    return findings(load(query.question()), query);
+  }
+
+  /**
+   * The segment columns of a question's answers (every question's when none is given) with their
+   * values, merged as the findings merge them, and each value's answers, substantive answers and
+   * answers read, in one wave or all.
+   *
+   * @throws IllegalArgumentException when the question or wave is not the project's
+   */
+  public List<SegmentColumn> segments(Optional<String> question, Optional<String> wave)
+      throws InputException {
+    Loaded l = load(question);
+    Optional<String> only = wave.map(w -> PhraseMining.known(w, l.waves, "wave"));
+    Set<String> columns = new TreeSet<>();
+    for (ProjectStore.AnswerRow r : l.rows) {
+      if (only.isEmpty() || only.get().equals(r.wave())) {
+        columns.addAll(r.segments().keySet());
+      }
+    }
+    List<SegmentColumn> out = new ArrayList<>(columns.size());
+    for (String column : columns) {
+      Findings f =
+          findings(
+              l,
+              new FindingsQuery(question, Optional.of(column), Optional.empty(), Optional.empty()));
+      // Per value in the findings' order; with every question, a value's counts are summed.
+      Map<String, int[]> counts = new LinkedHashMap<>();
+      for (QuestionFindings q : f.questions()) {
+        for (SegmentFindings s : q.segments()) {
+          int[] c = counts.computeIfAbsent(s.value(), v -> new int[3]);
+          for (Map.Entry<String, Coverage> e : s.coverage().entrySet()) {
+            if (only.isEmpty() || only.get().equals(e.getKey())) {
+              Coverage cov = e.getValue();
+              c[0] += cov.answers() + cov.nonAnswers();
+              c[1] += cov.answers();
+              c[2] += cov.read();
+            }
+          }
+        }
+      }
+      List<SegmentColumn.Value> values = new ArrayList<>(counts.size());
+      counts.forEach(
+          (v, c) -> {
+            if (c[0] > 0) {
+              values.add(
+                  new SegmentColumn.Value(
+                      v,
+                      c[0],
+                      c[1],
+                      c[2],
+                      c[2] < Report.SMALL_BASE,
+                      !v.equals(SegmentFindings.NO_VALUE)));
+            }
+          });
+      if (values.stream().anyMatch(SegmentColumn.Value::filterable)) {
+        out.add(new SegmentColumn(column, values));
+      }
+    }
+    return out;
+  }
+
+  private Findings findings(Loaded l, FindingsQuery query) throws InputException {
     ReportSettings settings = ReportSettings.DEFAULTS;
     if (query.segment().isPresent()) {
       settings = settings.withSegment(query.segment().get());

@@ -73,6 +73,7 @@ final class CodingRoutes {
     cfg.routes.get("/api/suggestions", this::suggestions);
     cfg.routes.post("/api/suggestions/accept-above", this::acceptAbove);
     cfg.routes.get("/api/findings", this::findings);
+    cfg.routes.get("/api/segments", this::segments);
     cfg.routes.get("/api/report.html", this::reportHtml);
     cfg.routes.get("/api/report.md", this::reportMarkdown);
     cfg.routes.get("/api/export/coded.csv", this::codedCsv);
@@ -479,6 +480,13 @@ final class CodingRoutes {
   void findings(Context ctx) throws Exception {
     FindingsQuery query = findingsQuery(ctx);
     ctx.json(access.call(p -> p.reporting().findings(query)));
+  }
+
+  /** The segment columns and their values with answers and read bases, for the screens' picker. */
+  void segments(Context ctx) throws Exception {
+    Optional<String> question = text(ctx, "question");
+    Optional<String> wave = text(ctx, "wave");
+    ctx.json(Map.of("columns", access.call(p -> p.reporting().segments(question, wave))));
   }
 
   void reportHtml(Context ctx) throws Exception {
