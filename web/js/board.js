@@ -4,6 +4,7 @@
 import { api, query } from './api.js';
 import { h, fill, plural } from './dom.js';
 import { coderBar, current as coderName } from './coder.js';
+import { segmentPicker } from './segments.js';
 
 const SLOTS = [
   ['headline', 'Headline ideas'],
@@ -22,7 +23,7 @@ export function mount(section, context) {
   ctx = context;
   els = {};
   els.wave = h('select', { id: 'board-wave' });
-  els.segment = h('input', { type: 'text', id: 'board-segment', placeholder: 'device=mobile', autocomplete: 'off', spellcheck: 'false' });
+  els.segment = segmentPicker('board', { ctx, wave: els.wave });
   els.filterError = h('div', { class: 'error', id: 'board-filter-error', role: 'alert', hidden: true });
   els.status = h('p', { class: 'status', id: 'board-status', 'aria-live': 'polite' });
   els.candidates = h('div', { id: 'board-candidates' });
@@ -33,7 +34,7 @@ export function mount(section, context) {
     'form',
     { class: 'filters', on: { submit: (e) => { e.preventDefault(); run(); } } },
     h('div', { class: 'field' }, h('label', { for: 'board-wave' }, 'Wave'), els.wave),
-    h('div', { class: 'field' }, h('label', { for: 'board-segment' }, 'Segment'), els.segment),
+    els.segment.fields,
     h('div', { class: 'field end' }, h('button', { type: 'submit', class: 'primary', id: 'board-go' }, 'Show wording')),
   );
   const exports = h(
@@ -92,7 +93,7 @@ async function run() {
   ran = true;
   const mine = ++asked;
   els.filterError.hidden = true;
-  els.segment.removeAttribute('aria-invalid');
+  els.segment.invalid(false);
   els.status.textContent = 'Ranking buyer wording…';
   const seg = els.segment.value.trim();
   try {
@@ -106,8 +107,7 @@ async function run() {
     els.filterError.textContent = e.message;
     els.filterError.hidden = false;
     if (e.where.parameter === 'segment') {
-      els.segment.setAttribute('aria-invalid', 'true');
-      els.segment.focus();
+      els.segment.invalid(true);
     }
   }
 }

@@ -6,6 +6,7 @@ import { api, query, wholeText } from './api.js';
 import { h, fill, count, plural, position } from './dom.js';
 import { coderBar, current as coderName, onCoder } from './coder.js';
 import { orderChoice } from './queue.js';
+import { segmentPicker } from './segments.js';
 
 const PAGE = 50;
 const RESERVED = new Set(['j', 'k', 'z']);
@@ -47,7 +48,7 @@ export function mount(section, context) {
     h('option', { value: 'yes' }, 'Coded'),
   );
   els.code = h('select', { id: 'coding-code' });
-  els.segment = h('input', { type: 'text', id: 'coding-segment', placeholder: 'device=mobile', autocomplete: 'off', spellcheck: 'false' });
+  els.segment = segmentPicker('coding', { ctx, wave: els.wave, question: els.question });
   els.query = h('input', { type: 'search', id: 'coding-query', placeholder: 'delivery AND NOT price', autocomplete: 'off', spellcheck: 'false' });
   els.filterError = h('div', { class: 'error', id: 'coding-filter-error', role: 'alert', hidden: true });
   els.progress = h('p', { class: 'coding-progress', id: 'coding-progress', 'aria-live': 'polite' });
@@ -67,7 +68,7 @@ export function mount(section, context) {
     field('coding-question', 'Question', els.question),
     field('coding-state', 'Show', els.state),
     field('coding-code', 'With code', els.code),
-    field('coding-segment', 'Segment', els.segment),
+    els.segment.fields,
     els.order.field,
     h('div', { class: 'field grow' }, h('label', { for: 'coding-query' }, 'Search ', h('kbd', {}, '/')), els.query),
     h('div', { class: 'field end' }, h('button', { type: 'submit', class: 'primary', id: 'coding-go' }, 'Show answers')),

@@ -3,6 +3,7 @@
 // has found (nearly) all the codes there are. Charts are SVG drawn here; no library.
 import { api, query } from './api.js';
 import { h, fill, count, plural } from './dom.js';
+import { segmentPicker } from './segments.js';
 
 const SVG = 'http://www.w3.org/2000/svg';
 
@@ -15,6 +16,7 @@ export function mount(section, context) {
   els.question = h('select', { id: 'findings-question' });
   els.from = h('select', { id: 'findings-from' });
   els.to = h('select', { id: 'findings-to' });
+  els.segment = segmentPicker('findings', { ctx, question: els.question, values: false, onChange: () => run() });
   els.error = h('div', { class: 'error', id: 'findings-error', role: 'alert', hidden: true });
   els.status = h('p', { class: 'status', id: 'findings-status', 'aria-live': 'polite' });
   els.out = h('div', { id: 'findings-out' });
@@ -29,6 +31,7 @@ export function mount(section, context) {
       h('div', { class: 'field' }, h('label', { for: 'findings-question' }, 'Question'), els.question),
       h('div', { class: 'field' }, h('label', { for: 'findings-from' }, 'Compare'), els.from),
       h('div', { class: 'field' }, h('label', { for: 'findings-to' }, 'with'), els.to),
+      els.segment.fields,
       h('div', { class: 'field end' }, h('button', { type: 'submit', class: 'primary', id: 'findings-go' }, 'Show findings')),
     ),
     els.downloads,
@@ -53,7 +56,7 @@ function fillChoices(summary) {
 }
 
 function params() {
-  return { question: els.question.value, from: els.from.value, to: els.to.value };
+  return { question: els.question.value, from: els.from.value, to: els.to.value, segment: els.segment.column };
 }
 
 function renderDownloads() {
@@ -200,6 +203,7 @@ function questionFindings(q, index) {
     h('h3', {}, 'Share of answers, wave by wave'),
     h('p', { class: 'hint' }, 'Each dot is the share of the answers a person read; its bar the 95% interval (Wilson). A hollow dot is by rule: over the answers its rules ran on. Bases under 30 are small; an interval wider than 20 points is imprecise.'),
     q.codes.length === 0 ? h('p', { class: 'hint' }, 'No codes given yet.') : h('div', { class: 'small-multiples' }, q.codes.map((c) => shareChart(c, waves))),
+    q.segments && q.segments.length ? bySegment(q, waves, id) : null,
     h('h3', {}, 'Codes that come together'),
     heatmap(q),
     h('h3', {}, 'Has coding found every code?'),
@@ -213,6 +217,116 @@ function verdictItem(c) {
     { class: `verdict v-${c.verdict.replaceAll(' ', '-')}` },
     h('span', { class: 'words' }, c.by_rule ? `${sentence(c)} (by rule)` : sentence(c)),
     h('span', { class: 'numbers' }, `${points(c.diff)} (95% interval ${signed(c.ci.lower)} to ${signed(c.ci.upper)}; adjusted p ${pValue(c.p_adjusted)})`),
+  );
+}
+
+// ---- by segment ----
+
+/** Where each code lives: its share in each value of the segment column, with base and coverage. */
+function bySegment(q, waves, id) {
+  const segs = q.segments;
+  const column = segs[0].segment;
+  return h(
+    'section',
+    { class: 'by-segment', id: `${id}-segments`, 'aria-labelledby': `${id}-segments-h` },
+    h('h3', { id: `${id}-segments-h` }, `By ${column}`),
+    h('p', { class: 'hint' }, `Each value of “${column}” with the answers a person read in it; a share is over those. Bases under 30 are small (dashed, red): too few to say where a theme lives.`),
+    h(
+      'div',
+      { class: 'tablewrap' },
+      h(
+        'table',
+        { class: 'segment-coverage', id: `${id}-segment-coverage` },
+        h('thead', {}, h('tr', {}, h('th', { scope: 'col' }, column), waves.map((w) => h('th', { scope: 'col' }, `${w}: answers read`)))),
+        h(
+          'tbody',
+          {},
+          segs.map((s) =>
+            h(
+              'tr',
+              {},
+              h('th', { scope: 'row' }, h('bdi', {}, s.value)),
+              waves.map((w) => {
+                const c = s.coverage[w];
+                const small = (s.bases[w] || 0) < 30;
+                return h('td', { class: small ? 'small-base' : null }, c ? coverage(c) : '—', small ? h('span', { class: 'tag weak' }, 'small base') : null);
+              }),
+            ),
+          ),
+        ),
+      ),
+    ),
+    h('div', { class: 'segment-codes' }, q.codes.map((c) => codeBySegment(c, segs, waves))),
+  );
+}
+
+/** The latest wave in which some value has a share of the code. */
+function latestWave(shares, waves) {
+  for (let i = waves.length - 1; i >= 0; i--) if (shares.some((x) => x.share && x.share.waves[waves[i]])) return waves[i];
+  return null;
+}
+
+function codeBySegment(c, segs, waves) {
+  const shares = segs.map((s) => ({ value: s.value, share: s.codes.find((x) => x.code_id === c.code_id) }));
+  const top = Math.max(0.1, ...shares.flatMap((x) => (x.share ? Object.values(x.share.waves).map((w) => w.ci.upper) : [])));
+  const wave = latestWave(shares, waves);
+  return h(
+    'figure',
+    { class: 'segment-code' },
+    h('figcaption', {}, c.parent ? `${c.parent} › ` : '', h('strong', {}, c.code), c.by_rule ? ' (by rule)' : '', ' · ', highest(c, shares, wave)),
+    h(
+      'table',
+      {},
+      h('thead', {}, h('tr', {}, h('th', { scope: 'col' }, 'Value'), waves.map((w) => h('th', { scope: 'col' }, w)))),
+      h(
+        'tbody',
+        {},
+        shares.map((x) =>
+          h(
+            'tr',
+            {},
+            h('th', { scope: 'row' }, h('bdi', {}, x.value)),
+            waves.map((w) => shareCell(x.share ? x.share.waves[w] : null, x.share && x.share.no_share ? x.share.no_share[w] : null, top)),
+          ),
+        ),
+      ),
+    ),
+  );
+}
+
+/** The value(s) where the code's share is highest, among bases of 30 or more only. */
+function highest(c, shares, wave) {
+  if (!wave) return 'no share in any value yet';
+  const firm = shares.filter((x) => x.share && x.share.waves[wave] && !x.share.waves[wave].small_base);
+  if (firm.length === 0) return h('span', { class: 'flags' }, `no value has a base of 30 or more in ${wave}: too few answers read to say where it is highest`);
+  const best = Math.max(...firm.map((x) => x.share.waves[wave].share));
+  const at = firm.filter((x) => x.share.waves[wave].share === best);
+  const s = at[0].share.waves[wave];
+  const names = at.map((x) => `“${x.value}”`).join(' and ');
+  const others = firm.length > 1 ? '' : ' (the only value with a base of 30 or more)';
+  return `highest in ${names} in ${wave}: ${pct(s.share)} (${s.count} of ${s.base})${others}`;
+}
+
+function shareCell(s, why, top) {
+  if (!s) return h('td', { class: 'hint' }, why || '—');
+  const W = 90;
+  const H = 14;
+  const x = (v) => 2 + (v / top) * (W - 4);
+  const weak = s.small_base || s.imprecise;
+  const bar = svg(
+    'svg',
+    { viewBox: `0 0 ${W} ${H}`, width: W, height: H, 'aria-hidden': 'true', class: 'segment-bar' },
+    svg('line', { x1: x(0), x2: W - 2, y1: H - 1, y2: H - 1, class: 'axis' }),
+    svg('line', { x1: x(s.ci.lower), x2: x(Math.min(top, s.ci.upper)), y1: H / 2, y2: H / 2, class: `interval${weak ? ' weak' : ''}` }),
+    svg('circle', { cx: x(s.share), cy: H / 2, r: 3, class: s.by_rule ? 'dot rule' : 'dot' }),
+  );
+  return h(
+    'td',
+    { class: `segment-share${s.small_base ? ' small-base' : ''}` },
+    bar,
+    ' ',
+    h('span', { class: 'numbers' }, `${pct(s.share)} (${pct(s.ci.lower)}–${pct(s.ci.upper)}), ${s.count} of ${s.base}`),
+    s.small_base ? h('span', { class: 'tag weak' }, 'small base') : s.imprecise ? h('span', { class: 'tag weak' }, 'imprecise') : null,
   );
 }
 

@@ -3,6 +3,7 @@
 import { api, query } from './api.js';
 import { h, fill, clear, count, plural, position } from './dom.js';
 import { current as coderName } from './coder.js';
+import { segmentPicker } from './segments.js';
 
 let ctx;
 let els;
@@ -13,7 +14,7 @@ export function mount(section, context) {
   els.question = h('select', { id: 'phrases-question' });
   els.wave = h('select', { id: 'phrases-wave' });
   els.against = h('select', { id: 'phrases-against' });
-  els.segment = h('input', { type: 'text', id: 'phrases-segment', placeholder: 'device=mobile', autocomplete: 'off', spellcheck: 'false' });
+  els.segment = segmentPicker('phrases', { ctx, wave: els.wave, question: els.question });
   els.error = h('div', { class: 'error', id: 'phrases-error', role: 'alert', hidden: true });
   els.status = h('p', { class: 'status', id: 'phrases-status', 'aria-live': 'polite' });
   els.out = h('div', { id: 'phrases-out' });
@@ -23,7 +24,7 @@ export function mount(section, context) {
     h('div', { class: 'field' }, h('label', { for: 'phrases-question' }, 'Question'), els.question),
     h('div', { class: 'field' }, h('label', { for: 'phrases-wave' }, 'Wave'), els.wave),
     h('div', { class: 'field' }, h('label', { for: 'phrases-against' }, 'Compare with'), els.against),
-    h('div', { class: 'field' }, h('label', { for: 'phrases-segment' }, 'Segment'), els.segment),
+    els.segment.fields,
     h('div', { class: 'field end' }, h('button', { type: 'submit', class: 'primary', id: 'phrases-go' }, 'Show phrases')),
   );
   fill(
