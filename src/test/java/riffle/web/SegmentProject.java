@@ -14,8 +14,8 @@ import riffle.model.Progress;
 
 /**
  * The segment fixture wave read by a person: every substantive answer but two of desktop's, those
- * that mention delivery coded "Delivery". Mobile then has a read base of 35, desktop 8 and the
- * blanks 4 (both small).
+ * that mention delivery coded "Delivery" (18 of mobile's 35, 1 of desktop's 8), and the four
+ * without a device coded "Delivery" too (4 of 4: the highest share, on a small base).
  */
 final class SegmentProject {
   private SegmentProject() {}
@@ -42,7 +42,8 @@ final class SegmentProject {
         if (nonAnswer || unreadDesktop) {
           continue;
         }
-        if (line.toLowerCase(Locale.ROOT).contains("deliver")) {
+        // The four without a device all get the code: a share of 100% on a base of 4.
+        if (line.toLowerCase(Locale.ROOT).contains("deliver") || i >= 46) {
           p.coding().assign("setup", ids.get(i), code, Optional.empty());
         } else {
           p.coding().markRead("setup", ids.get(i));
