@@ -57,8 +57,22 @@ export function segmentPicker(prefix, { ctx, wave = null, question = null, value
     if (values) fillValues();
   }
 
+  // Counts change as answers are read: read again when the project's counts do, but only on the
+  // screen in view (the others when they are shown), so each computation is one a person sees.
+  let stale = false;
+  const inView = () => column.isConnected && column.closest('section[hidden]') === null;
+  const whenInView = () => {
+    if (inView()) {
+      stale = false;
+      load();
+    } else stale = true;
+  };
   for (const select of [wave, question]) if (select) select.addEventListener('change', load);
-  if (ctx) ctx.onSummary(load);
+  if (ctx) ctx.onSummary(whenInView);
+  queueMicrotask(whenInView); // once the screen has put the picker in the page
+  window.addEventListener('hashchange', () => {
+    if (stale) whenInView();
+  });
 
   const fields = [
     h('div', { class: 'field' }, h('label', { for: column.id }, 'Segment'), column),
