@@ -25,9 +25,10 @@ import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * The segment picker in Debian's Chromium, headless, over the segment fixture: the coding screen
- * lists the device values with their read bases, and the findings screen split by device shows each
- * value's share of "Delivery" with its base, flags the small ones, and names the value where it is
- * highest among bases of 30 or more (mobile, not the 4 of 4 without a device).
+ * lists the device values with their read bases and limits its answers to the one picked, and the
+ * findings screen split by device shows each value's share of "Delivery" with its base, flags the
+ * small ones, and names the value where it is highest among bases of 30 or more (mobile, not the 4
+ * of 4 without a device).
  */
 @Tag("browser")
 class SegmentBrowserTest {
@@ -82,6 +83,12 @@ class SegmentBrowserTest {
             "mobile \u2014 36 answers, 35 read",
             "(no value) \u2014 4 answers, 4 read, small base (cannot be picked)"),
         values);
+
+    // Picking mobile limits the answers to all three spellings of it.
+    new Select(driver.findElement(By.id("coding-segment"))).selectByValue("mobile");
+    driver.findElement(By.id("coding-go")).click();
+    waiting().until(d -> text("#coding-progress").startsWith("Read 35 of 35 answers"));
+    assertTrue(text("#coding-progress").contains("1 non-answer apart"), text("#coding-progress"));
   }
 
   @Test
