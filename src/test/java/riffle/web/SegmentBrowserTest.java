@@ -69,7 +69,7 @@ class SegmentBrowserTest {
   }
 
   @Test
-  void theCodingScreenListsEachValueWithItsReadBase() {
+  void theCodingScreenListsEachValueWithItsReadBase() throws IOException {
     driver.get(server.url().resolve("/#coding").toString());
     waiting().until(d -> text("#coding-segment-column").contains("device"));
     new Select(driver.findElement(By.id("coding-segment-column"))).selectByValue("device");
@@ -89,6 +89,14 @@ class SegmentBrowserTest {
     driver.findElement(By.id("coding-go")).click();
     waiting().until(d -> text("#coding-progress").startsWith("Read 35 of 35 answers"));
     assertTrue(text("#coding-progress").contains("1 non-answer apart"), text("#coding-progress"));
+    shot("coding-segment-picker.png");
+  }
+
+  static void shot(String name) throws IOException {
+    Path shots = Path.of("target", "screenshots");
+    Files.createDirectories(shots);
+    Path png = ((TakesScreenshot) driver).getScreenshotAs(OutputType.FILE).toPath();
+    Files.copy(png, shots.resolve(name), StandardCopyOption.REPLACE_EXISTING);
   }
 
   @Test
@@ -118,11 +126,8 @@ class SegmentBrowserTest {
                 "return document.querySelectorAll('#findings-q1-segments .segment-share.small-base"
                     + " line.interval.weak').length;");
     assertTrue(((Number) dashed).intValue() >= 2, "small bases are drawn dashed: " + dashed);
-    Path shots = Path.of("target", "screenshots");
-    Files.createDirectories(shots);
     ((JavascriptExecutor) driver)
         .executeScript("document.getElementById('findings-q1-segments').scrollIntoView();");
-    Path png = ((TakesScreenshot) driver).getScreenshotAs(OutputType.FILE).toPath();
-    Files.copy(png, shots.resolve("findings-by-segment.png"), StandardCopyOption.REPLACE_EXISTING);
+    shot("findings-by-segment.png");
   }
 }
