@@ -58,14 +58,9 @@ public final class Project implements AutoCloseable {
 
   private ImportReport importTable(ImportRequest request, SurveyTable table, Progress progress)
       throws InputException {
-    String stampBefore = Indexes.stamp(store);
     long lastBefore = store.lastAnswerId();
     ImportReport report = new WaveImporter(store).store(request, table, progress);
-    if (index != null) {
-      index.close();
-      index = null;
-    }
-    Indexes.afterImport(store, stampBefore, lastBefore);
+    Indexes.afterImport(store, index);
     if (!store.rules().isEmpty() && store.lastAnswerId() > lastBefore) {
       coding().applyRules(request.actor(), java.util.OptionalLong.empty(), lastBefore);
     }

@@ -81,6 +81,16 @@ public final class ProjectStore implements AutoCloseable {
     } catch (SQLException e) {
       throw translate(file, e);
     }
+    try {
+      BusyWait.install(connection, file.getFileName().toString());
+    } catch (SQLException e) {
+      try {
+        connection.close();
+      } catch (SQLException ignored) {
+        // the connection was never used
+      }
+      throw translate(file, e);
+    }
     ProjectStore store = new ProjectStore(file, connection);
     try {
       store.prepareSchema();
@@ -96,6 +106,7 @@ public final class ProjectStore implements AutoCloseable {
     p.setProperty("journal_mode", "WAL");
     p.setProperty("foreign_keys", "true");
     p.setProperty("synchronous", "NORMAL");
+    // While the connection is set up; then BusyWait takes over, announcing long waits.
     p.setProperty("busy_timeout", Integer.toString(BUSY_TIMEOUT_MS));
     return p;
   }
