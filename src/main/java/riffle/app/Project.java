@@ -1,9 +1,11 @@
 package riffle.app;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.Consumer;
 import riffle.index.AnswerIndex;
 import riffle.ingest.SurveyTable;
 import riffle.model.Analysis;
@@ -16,6 +18,7 @@ import riffle.model.SuggestionReport;
 import riffle.store.AnalysisCache;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
+import riffle.store.Waits;
 import riffle.text.AnalysisCodec;
 import riffle.text.TextAnalyzer;
 
@@ -36,6 +39,15 @@ public final class Project implements AutoCloseable {
   /** Opens an existing project, refusing a missing file. */
   public static Project openExisting(Path file) throws InputException {
     return new Project(ProjectStore.openExisting(file));
+  }
+
+  /**
+   * Sends this process's announcements of waits for another Riffle process (a write to the project
+   * file or its search index, after a second of waiting) to {@code to}; returns the previous
+   * receiver. By default they go nowhere.
+   */
+  public static Consumer<String> announceWaitsTo(Consumer<String> to) {
+    return Waits.announceTo(to);
   }
 
   /** The project file. */
@@ -69,16 +81,34 @@ public final class Project implements AutoCloseable {
 
   /**
    * Imports into the project at {@code file}, creating it when missing. The export is read in full
-   * first: an unusable export leaves no trace, not even a new empty project.
+   * first: an unusable export leaves no trace, not even a new empty project. A new project appears
+   * only once whole: an import stopped on the way (SIGTERM, a crash) leaves no project file.
    *
    * @see #importWave
    */
   public static ImportReport importInto(Path file, ImportRequest request, Progress progress)
       throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
+    if (!Files.exists(file)) {
+      Optional<ImportReport> created =
+          NewProject.create(file, p -> p.importTable(request, table, progress));
+      if (created.isPresent()) {
+        return created.get();
+      }
+      // Another process created the project meanwhile: the wave goes into it as into any other.
+    }
     try (Project project = openOrCreate(file)) {
       return project.importTable(request, table, progress);
     }
+  }
+
+  /** Folds the project into its one file, as before moving it (see {@link NewProject}). */
+  void foldIntoOneFile() throws ProjectFileException {
+    if (index != null) {
+      index.close();
+      index = null;
+    }
+    store.foldIntoOneFile();
   }
 
   /**

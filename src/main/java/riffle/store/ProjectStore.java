@@ -398,6 +398,26 @@ public final class ProjectStore implements AutoCloseable {
     return read(Summaries::summary);
   }
 
+  /**
+   * Ends write-ahead logging on this file, folding the log into it, so that the file alone holds
+   * the whole project (before it is moved into place); the next connection turns logging on again.
+   * Needs to be the file's only connection.
+   */
+  public void foldIntoOneFile() throws ProjectFileException {
+    String mode =
+        read(
+            c -> {
+              try (Statement s = c.createStatement();
+                  ResultSet rs = s.executeQuery("PRAGMA journal_mode = DELETE")) {
+                return rs.next() ? rs.getString(1) : "";
+              }
+            });
+    if (!mode.equalsIgnoreCase("delete")) {
+      throw new ProjectFileException(
+          file + " is open in another connection; it cannot be moved into place yet");
+    }
+  }
+
   /** Runs SQLite's integrity check; returns "ok" for a sound file. */
   public String integrityCheck() throws ProjectFileException {
     return read(
