@@ -178,6 +178,14 @@ public final class Project implements AutoCloseable {
     return store.answerIds();
   }
 
+  /**
+   * A value that moves whenever the project's answers, codebook, coding, rules or board change, in
+   * this process or any other; cheap to read, for noticing changes made elsewhere.
+   */
+  public String changes() throws InputException {
+    return store.contentStamp();
+  }
+
   /** Counts of waves, answers, codes and assignments. */
   public ProjectSummary summary() throws InputException {
     return store.summary();
