@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
@@ -22,9 +24,9 @@ import riffle.web.WebServer;
 
 /**
  * A server and the command line on one project, as an analyst runs them: the page open while
- * commands in a terminal (a second process) code, import a new wave and apply the page's rule. Every request
- * of the page keeps answering 2xx and shows the other process's changes at once, and the other
- * process sees the page's.
+ * commands in a terminal (a second process) code, import a new wave and apply the page's rule.
+ * Every request of the page keeps answering 2xx and shows the other process's changes at once, and
+ * the other process sees the page's.
  */
 class ServerAndCommandLineTest {
   static final String CODE = "delivery date unclear";
@@ -172,5 +174,55 @@ class ServerAndCommandLineTest {
       assertEquals(0, done.code(), done.err());
       assertEquals(searchTotal("delivery"), done.json().get("total").asInt());
     }
+  }
+
+  @Test
+  void aCommandLineImportWhileEightCodersWorkLosesNothing() throws Exception {
+    List<Long> codes = new ArrayList<>();
+    for (String name : List.of("price", "warranty", "delivery", "trust")) {
+      codes.add(
+          ok(page.post("/api/codes", Map.of("coder", "ana", "name", name)))
+              .get("code")
+              .get("id")
+              .asLong());
+    }
+    List<Long> answers = new ArrayList<>();
+    ok(page.get("/api/answers?limit=500"))
+        .get("answers")
+        .forEach(a -> answers.add(a.get("id").asLong()));
+    Path wave2 = dir.resolve("wave-2.csv");
+    SampleResponses.writeWave(SampleResponses.generateWave(SampleResponses.WAVE_2, 150, 9L), wave2);
+
+    ChildRiffle.Started importing =
+        terminal.start(
+            "import",
+            "--project",
+            project.toString(),
+            "--file",
+            wave2.toString(),
+            "--wave",
+            "Wave 2",
+            "--json");
+    CodingLoad.Result load =
+        CodingLoad.run(page, answers, codes, 8, 30, 400, importing.process()::isAlive, 11L);
+    CliTest.Run imported = importing.finish(120);
+    System.out.println("server and command line at once: " + load.summary());
+
+    assertEquals(0, imported.code(), imported.err());
+    assertEquals(0, load.refused(), "every request was answered 2xx");
+    assertEquals(0, load.lost(), "no acknowledged change was lost");
+    assertEquals(0, load.extra(), "nothing the coders did not leave");
+    assertEquals(0, load.undoWrong(), "each undo took back that coder's own last change");
+    int added = imported.json().get("answers").asInt();
+    assertEquals(added, searchTotal("wave:\"Wave 2\""), "the new wave is searchable");
+    int given = 0;
+    for (long code : codes) {
+      given += ok(page.get("/api/answers?limit=1&code=" + code)).get("total").asInt();
+    }
+    int held = 0;
+    for (var set : CodingLoad.assignments(page, answers, new java.util.HashSet<>(codes)).values()) {
+      held += set.size();
+    }
+    assertEquals(held, given, "the answer list's code filters agree with the assignments");
   }
 }
