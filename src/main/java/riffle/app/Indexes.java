@@ -13,7 +13,9 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import riffle.index.AnswerIndex;
 import riffle.index.IndexedAnswer;
+import riffle.model.BatchOutcome;
 import riffle.model.Chunk;
+import riffle.model.InputException;
 import riffle.model.Sentence;
 import riffle.store.AnalysisCache;
 import riffle.store.ProjectFileException;
@@ -78,25 +80,73 @@ final class Indexes {
         return;
       }
       try (AnswerIndex.Writer writer = lock(store, index, waitMillis)) {
-        // Read before the rows: whatever lands meanwhile is indexed now and again next time.
-        String now = stamp(store);
-        Optional<String> built = writer.stamp();
-        if (built.equals(Optional.of(now))) {
-          return; // another process caught up while this one waited
-        }
-        Optional<Since> since = built.flatMap(b -> Since.of(b, now));
-        if (since.isPresent()) {
-          Set<Long> ids = new TreeSet<>(store.answersTouchedSince(since.get().edit()));
-          ids.removeIf(id -> id > since.get().answer());
-          List<ProjectStore.AnswerRow> rows = new ArrayList<>(store.answerRows(ids));
-          rows.addAll(store.answerRows(since.get().answer()));
-          writer.add(answers(rows, store), now);
-        } else {
-          writer.rebuild(answers(store, 0), now);
-        }
+        write(store, writer);
       }
     } catch (IOException e) {
       throw cannot(store, e);
+    }
+  }
+
+  /**
+   * With the write lock held: adds the answers added and re-indexes those whose coding changed
+   * since the newest commit's stamp, or rebuilds everything when the stamp is from other versions
+   * or does not precede the project (a damaged or replaced index); nothing when it is current.
+   */
+  private static void write(ProjectStore store, AnswerIndex.Writer writer)
+      throws IOException, ProjectFileException {
+    // Read before the rows: whatever lands meanwhile is indexed now and again next time.
+    String now = stamp(store);
+    Optional<String> built = writer.stamp();
+    if (built.equals(Optional.of(now))) {
+      return; // another process caught up while this one waited
+    }
+    Optional<Since> since = built.flatMap(b -> Since.of(b, now));
+    if (since.isPresent()) {
+      Set<Long> ids = new TreeSet<>(store.answersTouchedSince(since.get().edit()));
+      ids.removeIf(id -> id > since.get().answer());
+      List<ProjectStore.AnswerRow> rows = new ArrayList<>(store.answerRows(ids));
+      rows.addAll(store.answerRows(since.get().answer()));
+      writer.add(answers(rows, store), now);
+    } else {
+      writer.rebuild(answers(store, 0), now);
+    }
+  }
+
+  /** Work on the project file and the analysis cache, such as storing an import. */
+  @FunctionalInterface
+  interface Storing<T> {
+    T run() throws InputException;
+  }
+
+  /** How work is wrapped; {@link #whileStoring} is the one wrapping of imports. */
+  @FunctionalInterface
+  interface Around {
+    BatchOutcome around(Storing<BatchOutcome> work) throws InputException;
+  }
+
+  /**
+   * Runs {@code work} (an import's writes) holding the index's write lock when the project has an
+   * index, then brings the index up to date under the same hold. Other processes wait for the lock
+   * meanwhile instead of indexing answers whose parses are not cached yet (which would analyse them
+   * a second time). Holds no project write lock while waiting for the index: nothing waits for the
+   * index inside a project transaction, so the two locks cannot deadlock.
+   */
+  static BatchOutcome whileStoring(ProjectStore store, AnswerIndex open, Storing<BatchOutcome> work)
+      throws InputException {
+    if (open == null && !Files.isDirectory(folder(store.file()))) {
+      return work.run();
+    }
+    AnswerIndex index = open != null ? open : open(store);
+    try (AnswerIndex.Writer writer = lock(store, index, LOCK_WAIT_MS)) {
+      BatchOutcome outcome = work.run();
+      write(store, writer);
+      return outcome;
+    } catch (IOException e) {
+      throw cannot(store, e);
+    } finally {
+      if (open == null) {
+        index.close();
+      }
     }
   }
 
@@ -164,17 +214,6 @@ final class Indexes {
         }
       }
       return Optional.of(new Since(Long.parseLong(b.group(2)), Long.parseLong(b.group(3))));
-    }
-  }
-
-  /** After an import: an index that exists is brought up to date (its new answers added). */
-  static void afterImport(ProjectStore store, AnswerIndex open) throws ProjectFileException {
-    if (open != null) {
-      catchUp(store, open);
-    } else if (Files.isDirectory(folder(store.file()))) {
-      try (AnswerIndex index = open(store)) {
-        catchUp(store, index);
-      }
     }
   }
 

@@ -51,8 +51,8 @@ final class NewProject {
   }
 
   /** Builds a project with {@code work} and puts it in place of the one at {@code file}, if any. */
-  static <T> T replace(Path file, Work<T> work) throws InputException {
-    return build(file, true, work).orElseThrow();
+  static void replace(Path file, Work<?> work) throws InputException {
+    build(file, true, work);
   }
 
   private static <T> Optional<T> build(Path file, boolean replace, Work<T> work)
@@ -76,7 +76,9 @@ final class NewProject {
         result = work.run(p);
         p.foldIntoOneFile();
       }
-      return publish(inside, target, folder, replace) ? Optional.of(result) : Optional.empty();
+      return publish(inside, target, folder, replace)
+          ? Optional.ofNullable(result)
+          : Optional.empty();
     } catch (IOException e) {
       throw new ProjectFileException(
           "cannot create project " + file + " (" + e.getMessage() + "); nothing was created");

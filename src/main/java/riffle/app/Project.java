@@ -71,8 +71,9 @@ public final class Project implements AutoCloseable {
   private ImportReport importTable(ImportRequest request, SurveyTable table, Progress progress)
       throws InputException {
     long lastBefore = store.lastAnswerId();
-    ImportReport report = new WaveImporter(store).store(request, table, progress);
-    Indexes.afterImport(store, index);
+    ImportReport report =
+        new WaveImporter(store, work -> Indexes.whileStoring(store, index, work))
+            .store(request, table, progress);
     if (!store.rules().isEmpty() && store.lastAnswerId() > lastBefore) {
       coding().applyRules(request.actor(), java.util.OptionalLong.empty(), lastBefore);
     }

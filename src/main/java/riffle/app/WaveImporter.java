@@ -29,6 +29,7 @@ import riffle.ingest.UnreadableInputException;
 import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.ColumnRole;
+import riffle.model.InputException;
 import riffle.model.InputProblem;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
@@ -44,14 +45,20 @@ final class WaveImporter {
   static final String DEFAULT_CODER = "import";
 
   private final ProjectStore store;
+  private final Indexes.Around storing;
 
-  WaveImporter(ProjectStore store) {
+  /**
+   * An importer into {@code store}; {@code storing} wraps the writes to the project and the
+   * analysis cache (the search index holds its lock around them).
+   */
+  WaveImporter(ProjectStore store, Indexes.Around storing) {
     this.store = store;
+    this.storing = storing;
   }
 
   /** Stores a table read by {@link #read} as (part of) the requested wave. */
   ImportReport store(ImportRequest request, SurveyTable table, Progress progress)
-      throws ProjectFileException {
+      throws InputException {
     String wave = request.wave().map(String::strip).orElseGet(() -> defaultWave(request));
     if (wave.isEmpty()) {
       throw new IllegalArgumentException("the wave name is empty; give one with --wave NAME");
@@ -91,9 +98,14 @@ final class WaveImporter {
             respondents,
             request.actor(),
             AnalysisCodec.VERSION);
-    BatchOutcome outcome = store.store(batch, progress);
-    Analyses.cache(store.file(), outcome.added());
-    Analyses.refresh(store, progress);
+    BatchOutcome outcome =
+        storing.around(
+            () -> {
+              BatchOutcome o = store.store(batch, progress);
+              Analyses.cache(store.file(), o.added());
+              Analyses.refresh(store, progress);
+              return o;
+            });
     List<InputProblem> problems = new ArrayList<>(table.problems());
     problems.addAll(outcome.problems());
     return new ImportReport(
