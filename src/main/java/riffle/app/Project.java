@@ -3,7 +3,9 @@ package riffle.app;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.Consumer;
 import riffle.index.AnswerIndex;
@@ -65,14 +67,15 @@ public final class Project implements AutoCloseable {
    */
   public ImportReport importWave(ImportRequest request, Progress progress) throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
-    return importTable(request, table, progress);
+    return importTable(request, table, progress, new HashMap<>());
   }
 
-  private ImportReport importTable(ImportRequest request, SurveyTable table, Progress progress)
+  private ImportReport importTable(
+      ImportRequest request, SurveyTable table, Progress progress, Map<String, Analysis> analysed)
       throws InputException {
     long lastBefore = store.lastAnswerId();
     ImportReport report =
-        new WaveImporter(store, work -> Indexes.whileStoring(store, index, work))
+        new WaveImporter(store, work -> Indexes.whileStoring(store, index, work), analysed)
             .store(request, table, progress);
     if (!store.rules().isEmpty() && store.lastAnswerId() > lastBefore) {
       coding().applyRules(request.actor(), java.util.OptionalLong.empty(), lastBefore);
@@ -90,16 +93,18 @@ public final class Project implements AutoCloseable {
   public static ImportReport importInto(Path file, ImportRequest request, Progress progress)
       throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
+    // Shared by both attempts: a second one (into a project made meanwhile) analyses nothing again.
+    Map<String, Analysis> analysed = new HashMap<>();
     if (!Files.exists(file)) {
       Optional<ImportReport> created =
-          NewProject.create(file, p -> p.importTable(request, table, progress));
+          NewProject.create(file, p -> p.importTable(request, table, progress, analysed));
       if (created.isPresent()) {
         return created.get();
       }
       // Another process created the project meanwhile: the wave goes into it as into any other.
     }
     try (Project project = openOrCreate(file)) {
-      return project.importTable(request, table, progress);
+      return project.importTable(request, table, progress, analysed);
     }
   }
 

@@ -46,14 +46,17 @@ final class WaveImporter {
 
   private final ProjectStore store;
   private final Indexes.Around storing;
+  private final Map<String, Analysis> analysed;
 
   /**
    * An importer into {@code store}; {@code storing} wraps the writes to the project and the
-   * analysis cache (the search index holds its lock around them).
+   * analysis cache (the search index holds its lock around them); {@code analysed} keeps the
+   * analysis of each text, so that a second attempt with the same table analyses nothing again.
    */
-  WaveImporter(ProjectStore store, Indexes.Around storing) {
+  WaveImporter(ProjectStore store, Indexes.Around storing, Map<String, Analysis> analysed) {
     this.store = store;
     this.storing = storing;
+    this.analysed = analysed;
   }
 
   /** Stores a table read by {@link #read} as (part of) the requested wave. */
@@ -83,7 +86,8 @@ final class WaveImporter {
 
     List<Column> texts = table.columnsWith(ColumnRole.TEXT);
     List<String> questions = texts.stream().map(Column::header).toList();
-    List<NewRespondent> respondents = respondents(table, texts, store.storedTexts(wave), progress);
+    List<NewRespondent> respondents =
+        respondents(table, texts, store.storedTexts(wave), analysed, progress);
     WaveBatch batch =
         new WaveBatch(
             wave,
@@ -165,7 +169,11 @@ final class WaveImporter {
    * same text (those would be duplicates, and analysing them is wasted work).
    */
   private static List<NewRespondent> respondents(
-      SurveyTable table, List<Column> texts, Map<String, String> stored, Progress progress) {
+      SurveyTable table,
+      List<Column> texts,
+      Map<String, String> stored,
+      Map<String, Analysis> analysed,
+      Progress progress) {
     Optional<Column> id = first(table, ColumnRole.ID);
     Optional<Column> date = first(table, ColumnRole.DATE);
     Optional<Column> coder = first(table, ColumnRole.CODER);
@@ -193,7 +201,12 @@ final class WaveImporter {
         }
       }
     }
-    Iterator<Analysis> analyses = Analyses.analyzer().analyzeAll(fresh, progress).iterator();
+    List<String> unknown = fresh.stream().filter(t -> !analysed.containsKey(t)).toList();
+    Iterator<Analysis> done = Analyses.analyzer().analyzeAll(unknown, progress).iterator();
+    for (String text : unknown) {
+      analysed.put(text, done.next());
+    }
+    Iterator<Analysis> analyses = fresh.stream().map(analysed::get).iterator();
     List<NewRespondent> out = new ArrayList<>(table.rows().size());
     for (int r = 0; r < table.rows().size(); r++) {
       SurveyRow row = table.rows().get(r);
