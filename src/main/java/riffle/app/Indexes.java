@@ -82,6 +82,8 @@ final class Indexes {
       try (AnswerIndex.Writer writer = lock(store, index, waitMillis)) {
         write(store, writer);
       }
+    } catch (ProjectFileException e) {
+      throw e;
     } catch (IOException e) {
       throw cannot(store, e);
     }
@@ -141,6 +143,8 @@ final class Indexes {
       BatchOutcome outcome = work.run();
       write(store, writer);
       return outcome;
+    } catch (InputException e) {
+      throw e;
     } catch (IOException e) {
       throw cannot(store, e);
     } finally {
@@ -220,6 +224,8 @@ final class Indexes {
   private static AnswerIndex open(ProjectStore store) throws ProjectFileException {
     try {
       return AnswerIndex.open(folder(store.file()));
+    } catch (ProjectFileException e) {
+      throw e;
     } catch (IOException e) {
       throw cannot(store, e);
     }

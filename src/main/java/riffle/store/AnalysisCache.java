@@ -22,7 +22,7 @@ import org.sqlite.SQLiteException;
  * no work. Not thread-safe: one instance per thread.
  */
 public final class AnalysisCache implements AutoCloseable {
-  private static final int APPLICATION_ID = 0x52664331;
+  static final int APPLICATION_ID = 0x52664331;
 
   private final Connection connection;
 
