@@ -23,7 +23,8 @@ import java.util.function.BooleanSupplier;
  * off codes, undoing their own last change, and reading the answer list and the search (which make
  * the server's index catch up). Each coder keeps what the server acknowledged — the assignments it
  * should hold, and the stack of edits that undo takes back — and at the end the server's
- * assignments are compared with it. Seeded: the same seed makes the same requests.
+ * assignments are compared with it. Seeded: the same seed makes the same requests. Coders are named
+ * after the seed: runs with different seeds and codes do not undo each other's edits.
  */
 final class CodingLoad {
   /**
@@ -106,7 +107,7 @@ final class CodingLoad {
       for (int k = i; k < answers.size(); k += coders) {
         own.add(answers.get(k));
       }
-      Coder c = new Coder(api, "coder-" + i, own, codes, new Random(seed + i));
+      Coder c = new Coder(api, "coder-" + seed + "-" + i, own, codes, new Random(seed + i));
       running.add(pool.submit(() -> c.work(least, most, meanwhile)));
     }
     List<Coder> done = new ArrayList<>();
