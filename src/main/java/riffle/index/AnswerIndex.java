@@ -223,9 +223,9 @@ public final class AnswerIndex implements AutoCloseable {
   /**
    * The folder with its write lock already held: the writer's own request gets that lock. Commits
    * are not forced to the disk (no fsync): the index is derived, a process that ends however it
-   * ends leaves its writes with the operating system, and after a power cut an index that reads as
-   * damaged is rebuilt (Lucene checks each commit's checksums when it opens it). Forcing every
-   * commit cost about four times the catch-up of a few coded answers.
+   * ends leaves its writes with the operating system, and after a power cut an index that cannot be
+   * read is rebuilt. Forcing every commit to the disk made catching up with one coded answer about
+   * four times slower (measured on the shared build machine: p50 165 ms against 41 ms).
    */
   private static final class Locked extends FilterDirectory {
     private final Lock lock;

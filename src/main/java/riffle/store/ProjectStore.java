@@ -399,20 +399,21 @@ public final class ProjectStore implements AutoCloseable {
   }
 
   /**
-   * Ends write-ahead logging on this file, folding the log into it, so that the file alone holds
-   * the whole project (before it is moved into place); the next connection turns logging on again.
+   * Folds the write-ahead log into the file (a full checkpoint, the log emptied), so that the file
+   * alone holds the whole project, as before it is moved into place. The file stays in WAL mode
+   * (its header unchanged), so the next connection changes nothing in it merely by opening it.
    * Needs to be the file's only connection.
    */
   public void foldIntoOneFile() throws ProjectFileException {
-    String mode =
+    int busy =
         read(
             c -> {
               try (Statement s = c.createStatement();
-                  ResultSet rs = s.executeQuery("PRAGMA journal_mode = DELETE")) {
-                return rs.next() ? rs.getString(1) : "";
+                  ResultSet rs = s.executeQuery("PRAGMA wal_checkpoint(TRUNCATE)")) {
+                return rs.next() ? rs.getInt(1) : 1;
               }
             });
-    if (!mode.equalsIgnoreCase("delete")) {
+    if (busy != 0) {
       throw new ProjectFileException(
           file + " is open in another connection; it cannot be moved into place yet");
     }
