@@ -82,7 +82,11 @@ class ServerAndCommandLineTest {
             .asLong();
     long first = ok(page.get("/api/answers?limit=1")).get("answers").get(0).get("id").asLong();
 
+    String version = ok(page.get("/api/changes")).get("version").asText();
     command("code", "--project", project.toString(), "--answer", "" + first, "--add", CODE);
+    assertFalse(
+        version.equals(ok(page.get("/api/changes")).get("version").asText()),
+        "the page's change watch moved");
     assertEquals(1, searchTotal("code:\"" + CODE + "\""), "the command line's code is found");
     JsonNode coded = ok(page.get("/api/answers?code=" + code));
     assertEquals(1, coded.get("total").asInt());
