@@ -100,6 +100,29 @@ document.addEventListener('keydown', (e) => {
   }
 });
 
+// Changes made elsewhere (the command line, another page or server on this project): the page asks
+// every second whether the project moved; when it did, the counts are read again and the screen
+// shown is told, so that it shows them without a reload.
+let version = null;
+
+async function watch() {
+  if (document.visibilityState === 'visible') {
+    try {
+      const now = (await api('/api/changes')).version;
+      if (version !== null && now !== version) {
+        refresh();
+        const name = current();
+        if (mounted.has(name) && screens[name].changed) screens[name].changed();
+      }
+      version = now;
+    } catch (e) {
+      // asked again in a second; a real request shows its own error where it happened
+    }
+  }
+  setTimeout(watch, 1000);
+}
+
 window.addEventListener('hashchange', () => show(current()));
 show(current());
 refresh();
+watch();

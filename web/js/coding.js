@@ -150,12 +150,15 @@ function fillChoices(summary) {
 
 async function reloadCodes() {
   try {
-    const book = await api('/api/codes');
-    codes = book.codes;
+    applyCodes((await api('/api/codes')).codes);
   } catch (e) {
     showFilterError('The codebook could not be read', e);
-    codes = [];
+    applyCodes([]);
   }
+}
+
+function applyCodes(list) {
+  codes = list;
   byId = new Map(codes.map((c) => [c.id, c]));
   byKey = new Map(codes.filter((c) => c.key && !c.archived).map((c) => [c.key, c]));
   const chosen = els.code.value;
@@ -448,6 +451,7 @@ async function send() {
 }
 
 function deliver(op) {
+  sent++;
   const coder = coderName();
   switch (op.kind) {
     case 'assign':
@@ -525,8 +529,54 @@ function afterQuiet() {
       fetchSuggestions();
       els.order.refresh();
       ctx.refresh();
+      if (changedMeanwhile) readAgain();
     }
   }, 800);
+}
+
+// ---- changes made elsewhere ----
+
+let sent = 0; // changes handed to the server so far
+let changedMeanwhile = false;
+
+/**
+ * The project changed, maybe elsewhere (the command line, another page): the codebook and this
+ * page's codes are read again once its own changes have gone out, and redrawn only where they
+ * differ from what is shown.
+ */
+export function changed() {
+  if (!page) return;
+  if (queue.length > 0 || sending) changedMeanwhile = true;
+  else readAgain();
+}
+
+async function readAgain() {
+  changedMeanwhile = false;
+  const before = sent;
+  try {
+    const book = await api('/api/codes');
+    const ids = page.answers.map((a) => a.id);
+    const got = ids.length ? await api(`/api/assignments${query({ answers: ids.join(',') })}`) : { assignments: {} };
+    if (sent !== before || queue.length > 0) {
+      changedMeanwhile = true; // this page changed something meanwhile: its replies are newer
+      return;
+    }
+    let differs = false;
+    if (JSON.stringify(book.codes) !== JSON.stringify(codes)) {
+      applyCodes(book.codes);
+      differs = true;
+    }
+    for (const a of page.answers) {
+      const now = got.assignments[a.id] || [];
+      if (JSON.stringify(now) !== JSON.stringify(a.server)) {
+        a.server = now;
+        differs = true;
+      }
+    }
+    if (differs) renderAll();
+  } catch (e) {
+    changedMeanwhile = true; // tried again when the page is next quiet
+  }
 }
 
 async function refreshAssignments() {

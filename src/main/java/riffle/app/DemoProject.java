@@ -6,7 +6,6 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.time.LocalDate;
@@ -21,7 +20,8 @@ import riffle.store.ProjectStore;
 /**
  * Builds the demo project from the sample waves bundled in the jar (a copy of {@code
  * sample-responses/}), in a working folder of the user's choosing. A later run reuses the project
- * when the bundled waves are unchanged, and rebuilds it from scratch when they changed.
+ * when the bundled waves are unchanged, and rebuilds it from scratch when they changed (built aside
+ * and put in place whole, with a derived folder of its own, as {@link NewProject} does).
  */
 public final class DemoProject {
   static final String RESOURCES = "/riffle/sample-responses/";
@@ -67,36 +67,31 @@ public final class DemoProject {
         return new Result(project, true, List.of(), p.summary());
       }
     }
-    Path partial = folder.resolve(PROJECT + ".partial");
-    deleteProject(partial);
     List<ImportReport> imports = new ArrayList<>();
-    try (Project p = Project.openOrCreate(partial)) {
-      for (Entry e : entries) {
-        imports.add(
-            p.importWave(
-                ImportRequest.from(new ImportSource.Bytes(e.file(), resource(e.file())))
-                    .wave(e.wave())
-                    .fieldedOn(e.date())
-                    .actor("demo")
-                    .get(),
-                progress));
-      }
-      // The pilot's codes get their themes and directions from the demo's codebook file.
-      p.coding().importCodebook("demo", CODEBOOK, resource(CODEBOOK));
+    try {
+      NewProject.replace(
+          project,
+          p -> {
+            for (Entry e : entries) {
+              imports.add(
+                  p.importWave(
+                      ImportRequest.from(new ImportSource.Bytes(e.file(), resource(e.file())))
+                          .wave(e.wave())
+                          .fieldedOn(e.date())
+                          .actor("demo")
+                          .get(),
+                      progress));
+            }
+            // The pilot's codes get their themes and directions from the demo's codebook file.
+            p.coding().importCodebook("demo", CODEBOOK, resource(CODEBOOK));
+            return null;
+          });
     } catch (UnreadableInputException e) {
       throw new IllegalStateException("a bundled demo file is unreadable: " + e.getMessage(), e);
     }
-    deleteProject(project);
-    Files.move(partial, project, StandardCopyOption.ATOMIC_MOVE);
     Files.writeString(marker, fingerprint + "\n", StandardCharsets.UTF_8);
     try (Project p = Project.openExisting(project)) {
       return new Result(project, false, imports, p.summary());
-    }
-  }
-
-  private static void deleteProject(Path file) throws IOException {
-    for (String suffix : List.of("", "-wal", "-shm", "-journal")) {
-      Files.deleteIfExists(file.resolveSibling(file.getFileName() + suffix));
     }
   }
 

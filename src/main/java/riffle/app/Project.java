@@ -1,9 +1,13 @@
 package riffle.app;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.function.Consumer;
 import riffle.index.AnswerIndex;
 import riffle.ingest.SurveyTable;
 import riffle.model.Analysis;
@@ -16,6 +20,7 @@ import riffle.model.SuggestionReport;
 import riffle.store.AnalysisCache;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
+import riffle.store.Waits;
 import riffle.text.AnalysisCodec;
 import riffle.text.TextAnalyzer;
 
@@ -38,6 +43,15 @@ public final class Project implements AutoCloseable {
     return new Project(ProjectStore.openExisting(file));
   }
 
+  /**
+   * Sends this process's announcements of waits for another Riffle process (a write to the project
+   * file or its search index, after a second of waiting) to {@code to}; returns the previous
+   * receiver. By default they go nowhere.
+   */
+  public static Consumer<String> announceWaitsTo(Consumer<String> to) {
+    return Waits.announceTo(to);
+  }
+
   /** The project file. */
   public Path file() {
     return store.file();
@@ -53,19 +67,16 @@ public final class Project implements AutoCloseable {
    */
   public ImportReport importWave(ImportRequest request, Progress progress) throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
-    return importTable(request, table, progress);
+    return importTable(request, table, progress, new HashMap<>());
   }
 
-  private ImportReport importTable(ImportRequest request, SurveyTable table, Progress progress)
+  private ImportReport importTable(
+      ImportRequest request, SurveyTable table, Progress progress, Map<String, Analysis> analysed)
       throws InputException {
-    String stampBefore = Indexes.stamp(store);
     long lastBefore = store.lastAnswerId();
-    ImportReport report = new WaveImporter(store).store(request, table, progress);
-    if (index != null) {
-      index.close();
-      index = null;
-    }
-    Indexes.afterImport(store, stampBefore, lastBefore);
+    ImportReport report =
+        new WaveImporter(store, work -> Indexes.whileStoring(store, index, work), analysed)
+            .store(request, table, progress);
     if (!store.rules().isEmpty() && store.lastAnswerId() > lastBefore) {
       coding().applyRules(request.actor(), java.util.OptionalLong.empty(), lastBefore);
     }
@@ -74,16 +85,36 @@ public final class Project implements AutoCloseable {
 
   /**
    * Imports into the project at {@code file}, creating it when missing. The export is read in full
-   * first: an unusable export leaves no trace, not even a new empty project.
+   * first: an unusable export leaves no trace, not even a new empty project. A new project appears
+   * only once whole: an import stopped on the way (SIGTERM, a crash) leaves no project file.
    *
    * @see #importWave
    */
   public static ImportReport importInto(Path file, ImportRequest request, Progress progress)
       throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
-    try (Project project = openOrCreate(file)) {
-      return project.importTable(request, table, progress);
+    // Shared by both attempts: a second one (into a project made meanwhile) analyses nothing again.
+    Map<String, Analysis> analysed = new HashMap<>();
+    if (!Files.exists(file)) {
+      Optional<ImportReport> created =
+          NewProject.create(file, p -> p.importTable(request, table, progress, analysed));
+      if (created.isPresent()) {
+        return created.get();
+      }
+      // Another process created the project meanwhile: the wave goes into it as into any other.
     }
+    try (Project project = openOrCreate(file)) {
+      return project.importTable(request, table, progress, analysed);
+    }
+  }
+
+  /** Folds the project into its one file, as before moving it (see {@link NewProject}). */
+  void foldIntoOneFile() throws ProjectFileException {
+    if (index != null) {
+      index.close();
+      index = null;
+    }
+    store.foldIntoOneFile();
   }
 
   /**
@@ -151,6 +182,14 @@ public final class Project implements AutoCloseable {
   /** Every answer's id, in the order stored. */
   public List<Long> answerIds() throws InputException {
     return store.answerIds();
+  }
+
+  /**
+   * A value that moves whenever the project's answers, codebook, coding, rules or board change, in
+   * this process or any other; cheap to read, for noticing changes made elsewhere.
+   */
+  public String changes() throws InputException {
+    return store.contentStamp();
   }
 
   /** Counts of waves, answers, codes and assignments. */

@@ -96,9 +96,13 @@ final class Suggestions {
   static SuggestionReport suggest(
       ProjectStore store, Trained trained, List<ProjectStore.AnswerRow> rows)
       throws InputException {
+    // The codebook now, which may have changed since the engines were trained (in this process or
+    // another): a code removed or archived since is neither suggested nor measured.
     Map<Long, String> names = new HashMap<>();
     for (Code c : store.codes()) {
-      names.put(c.id(), c.name());
+      if (!c.archived()) {
+        names.put(c.id(), c.name());
+      }
     }
     List<Long> ids = new ArrayList<>(rows.size());
     rows.forEach(r -> ids.add(r.id()));
@@ -125,6 +129,9 @@ final class Suggestions {
         }
         SuggestionEngine engine = trained.engines().get(r.question());
         for (Suggestion s : engine.suggest(r.id(), analysis(r, sentences.get(r.id())), skip)) {
+          if (!names.containsKey(s.codeId())) {
+            continue;
+          }
           shown.add(
               new ShownSuggestion(
                   r.id(),
@@ -132,7 +139,7 @@ final class Suggestions {
                   r.wave(),
                   r.question(),
                   s.codeId(),
-                  names.getOrDefault(s.codeId(), "#" + s.codeId()),
+                  names.get(s.codeId()),
                   s.confidence()));
         }
       }
@@ -145,10 +152,13 @@ final class Suggestions {
     List<SuggestionQuality> metrics = new ArrayList<>();
     for (Map.Entry<String, SuggestionEngine> e : trained.engines().entrySet()) {
       for (CodeMetrics m : e.getValue().metrics()) {
+        if (!names.containsKey(m.codeId())) {
+          continue;
+        }
         metrics.add(
             new SuggestionQuality(
                 e.getKey(),
-                names.getOrDefault(m.codeId(), "#" + m.codeId()),
+                names.get(m.codeId()),
                 m.codeId(),
                 m.examples(),
                 m.support(),

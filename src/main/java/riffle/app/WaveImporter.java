@@ -31,6 +31,7 @@ import riffle.model.Analysis;
 import riffle.model.BatchOutcome;
 import riffle.model.ColumnRole;
 import riffle.model.ControlChars;
+import riffle.model.InputException;
 import riffle.model.InputProblem;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
@@ -47,14 +48,23 @@ final class WaveImporter {
   static final String DEFAULT_CODER = "import";
 
   private final ProjectStore store;
+  private final Indexes.Around storing;
+  private final Map<String, Analysis> analysed;
 
-  WaveImporter(ProjectStore store) {
+  /**
+   * An importer into {@code store}; {@code storing} wraps the writes to the project and the
+   * analysis cache (the search index holds its lock around them); {@code analysed} keeps the
+   * analysis of each text, so that a second attempt with the same table analyses nothing again.
+   */
+  WaveImporter(ProjectStore store, Indexes.Around storing, Map<String, Analysis> analysed) {
     this.store = store;
+    this.storing = storing;
+    this.analysed = analysed;
   }
 
   /** Stores a table read by {@link #read} as (part of) the requested wave. */
   ImportReport store(ImportRequest request, SurveyTable table, Progress progress)
-      throws ProjectFileException {
+      throws InputException {
     String wave = request.wave().map(String::strip).orElseGet(() -> defaultWave(request));
     if (wave.isEmpty()) {
       throw new IllegalArgumentException("the wave name is empty; give one with --wave NAME");
@@ -87,7 +97,8 @@ final class WaveImporter {
 
     List<Column> texts = table.columnsWith(ColumnRole.TEXT);
     List<String> questions = texts.stream().map(Column::header).toList();
-    List<NewRespondent> respondents = respondents(table, texts, store.storedTexts(wave), progress);
+    List<NewRespondent> respondents =
+        respondents(table, texts, store.storedTexts(wave), analysed, progress);
     WaveBatch batch =
         new WaveBatch(
             wave,
@@ -102,9 +113,14 @@ final class WaveImporter {
             respondents,
             request.actor(),
             AnalysisCodec.VERSION);
-    BatchOutcome outcome = store.store(batch, progress);
-    Analyses.cache(store.file(), outcome.added());
-    Analyses.refresh(store, progress);
+    BatchOutcome outcome =
+        storing.around(
+            () -> {
+              BatchOutcome o = store.store(batch, progress);
+              Analyses.cache(store.file(), o.added());
+              Analyses.refresh(store, progress);
+              return o;
+            });
     List<InputProblem> problems = new ArrayList<>(table.problems());
     problems.addAll(outcome.problems());
     problems.addAll(analysedInPart(table.source(), respondents, request.settings().maxProblems()));
@@ -209,7 +225,11 @@ final class WaveImporter {
    * same text (those would be duplicates, and analysing them is wasted work).
    */
   private static List<NewRespondent> respondents(
-      SurveyTable table, List<Column> texts, Map<String, String> stored, Progress progress) {
+      SurveyTable table,
+      List<Column> texts,
+      Map<String, String> stored,
+      Map<String, Analysis> analysed,
+      Progress progress) {
     Optional<Column> id = first(table, ColumnRole.ID);
     Optional<Column> date = first(table, ColumnRole.DATE);
     Optional<Column> coder = first(table, ColumnRole.CODER);
@@ -237,7 +257,12 @@ final class WaveImporter {
         }
       }
     }
-    Iterator<Analysis> analyses = Analyses.analyzer().analyzeAll(fresh, progress).iterator();
+    List<String> unknown = fresh.stream().filter(t -> !analysed.containsKey(t)).toList();
+    Iterator<Analysis> done = Analyses.analyzer().analyzeAll(unknown, progress).iterator();
+    for (String text : unknown) {
+      analysed.put(text, done.next());
+    }
+    Iterator<Analysis> analyses = fresh.stream().map(analysed::get).iterator();
     List<NewRespondent> out = new ArrayList<>(table.rows().size());
     for (int r = 0; r < table.rows().size(); r++) {
       SurveyRow row = table.rows().get(r);

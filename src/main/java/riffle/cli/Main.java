@@ -2,10 +2,13 @@ package riffle.cli;
 
 import java.io.InputStream;
 import java.io.PrintStream;
+import java.io.PrintWriter;
+import java.util.function.Consumer;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
+import riffle.app.Project;
 
 /** Command-line entry: {@code riffle COMMAND [OPTIONS]}. */
 @Command(
@@ -63,10 +66,21 @@ public final class Main implements Runnable {
     cl.setErr(TerminalText.writer(err));
     cl.setExecutionExceptionHandler(new Failures());
     cl.setCaseInsensitiveEnumValuesAllowed(true);
-    int code = cl.execute(args);
-    cl.getOut().flush();
-    cl.getErr().flush();
-    return code;
+    PrintWriter errors = cl.getErr();
+    // A wait for another Riffle process (after a second) is said on stderr.
+    Consumer<String> before =
+        Project.announceWaitsTo(
+            message -> {
+              errors.println("riffle: " + message);
+              errors.flush();
+            });
+    try {
+      return cl.execute(args);
+    } finally {
+      Project.announceWaitsTo(before);
+      cl.getOut().flush();
+      cl.getErr().flush();
+    }
   }
 
   /** Reads the version from the jar's manifest, when there is one. */

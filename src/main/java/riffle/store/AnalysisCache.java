@@ -12,6 +12,8 @@ import java.sql.Statement;
 import java.util.List;
 import java.util.Optional;
 import java.util.Properties;
+import org.sqlite.SQLiteErrorCode;
+import org.sqlite.SQLiteException;
 
 /**
  * The derived analysis cache beside a project ({@code NAME.riffle.d/analysis.db}): each answer's
@@ -20,7 +22,7 @@ import java.util.Properties;
  * no work. Not thread-safe: one instance per thread.
  */
 public final class AnalysisCache implements AutoCloseable {
-  private static final int APPLICATION_ID = 0x52664331;
+  static final int APPLICATION_ID = 0x52664331;
 
   private final Connection connection;
 
@@ -33,19 +35,27 @@ public final class AnalysisCache implements AutoCloseable {
     return projectFile.resolveSibling(projectFile.getFileName() + ".d");
   }
 
-  /** Opens the cache of {@code projectFile}, creating or rebuilding it as needed. */
+  /**
+   * Opens the cache of {@code projectFile}, creating it as needed. A cache file that SQLite finds
+   * damaged or not a database is deleted and made anew; one that another process is writing is
+   * waited for (SQLite lets one connection write at a time), never taken for damaged.
+   */
   public static AnalysisCache open(Path projectFile) throws ProjectFileException {
     Path folder = derivedFolder(projectFile);
     Path file = folder.resolve("analysis.db");
+    String name = "the analysis cache of " + projectFile.getFileName();
     try {
       Files.createDirectories(folder);
       try {
-        return connect(file);
-      } catch (SQLException damaged) {
+        return connect(file, name);
+      } catch (SQLException e) {
+        if (!damaged(e)) {
+          throw e;
+        }
         for (String suffix : List.of("", "-wal", "-shm")) {
           Files.deleteIfExists(folder.resolve("analysis.db" + suffix));
         }
-        return connect(file);
+        return connect(file, name);
       }
     } catch (IOException | SQLException e) {
       throw new ProjectFileException(
@@ -53,7 +63,16 @@ public final class AnalysisCache implements AutoCloseable {
     }
   }
 
-  private static AnalysisCache connect(Path file) throws SQLException {
+  private static boolean damaged(SQLException e) {
+    if (e instanceof SQLiteException se) {
+      int code = se.getResultCode().code & 0xff; // primary code, without the extended bits
+      return code == SQLiteErrorCode.SQLITE_CORRUPT.code
+          || code == SQLiteErrorCode.SQLITE_NOTADB.code;
+    }
+    return false;
+  }
+
+  private static AnalysisCache connect(Path file, String name) throws SQLException {
     Properties p = new Properties();
     p.setProperty("journal_mode", "WAL");
     p.setProperty("synchronous", "OFF");
@@ -61,13 +80,26 @@ public final class AnalysisCache implements AutoCloseable {
     SqliteLibrary.prepare();
     Connection c = DriverManager.getConnection("jdbc:sqlite:" + file, p);
     try (Statement s = c.createStatement()) {
-      int appId = ProjectStore.pragmaInt(c, "application_id");
-      if (appId != APPLICATION_ID) {
-        s.executeUpdate("DROP TABLE IF EXISTS analysis");
-        s.executeUpdate(
-            "CREATE TABLE analysis (answer_id INTEGER PRIMARY KEY, version TEXT NOT NULL,"
-                + " data BLOB NOT NULL)");
-        s.executeUpdate("PRAGMA application_id = " + APPLICATION_ID);
+      BusyWait.install(c, name);
+      if (ProjectStore.pragmaInt(c, "application_id") != APPLICATION_ID) {
+        // One process makes the table; another one starting at once waits, then finds it made.
+        s.executeUpdate("BEGIN IMMEDIATE");
+        boolean done = false;
+        try {
+          if (ProjectStore.pragmaInt(c, "application_id") != APPLICATION_ID) {
+            s.executeUpdate("DROP TABLE IF EXISTS analysis");
+            s.executeUpdate(
+                "CREATE TABLE analysis (answer_id INTEGER PRIMARY KEY, version TEXT NOT NULL,"
+                    + " data BLOB NOT NULL)");
+            s.executeUpdate("PRAGMA application_id = " + APPLICATION_ID);
+          }
+          s.executeUpdate("COMMIT");
+          done = true;
+        } finally {
+          if (!done) {
+            s.executeUpdate("ROLLBACK");
+          }
+        }
       }
       try (ResultSet rs = s.executeQuery("SELECT count(*) FROM analysis")) {
         rs.next();

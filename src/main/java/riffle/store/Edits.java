@@ -93,13 +93,15 @@ final class Edits {
       try (ResultSet rs = ps.executeQuery()) {
         while (rs.next()) {
           long answer = rs.getLong(5);
+          // wasNull speaks of the column read last: ask before reading the others.
+          Long answerId = rs.wasNull() ? null : answer;
           steps.add(
               new Step(
                   Table.named(rs.getString(1)),
                   RowImages.image(rs.getString(2)).orElseThrow(),
                   rs.getString(3),
                   rs.getString(4),
-                  rs.wasNull() ? null : answer));
+                  answerId));
         }
       }
     }

@@ -83,6 +83,16 @@ public final class ProjectStore implements AutoCloseable {
     } catch (SQLException e) {
       throw translate(file, e);
     }
+    try {
+      BusyWait.install(connection, file.getFileName().toString());
+    } catch (SQLException e) {
+      try {
+        connection.close();
+      } catch (SQLException ignored) {
+        // the connection was never used
+      }
+      throw translate(file, e);
+    }
     ProjectStore store = new ProjectStore(file, connection);
     try {
       store.prepareSchema();
@@ -98,6 +108,7 @@ public final class ProjectStore implements AutoCloseable {
     p.setProperty("journal_mode", "WAL");
     p.setProperty("foreign_keys", "true");
     p.setProperty("synchronous", "NORMAL");
+    // While the connection is set up; then BusyWait takes over, announcing long waits.
     p.setProperty("busy_timeout", Integer.toString(BUSY_TIMEOUT_MS));
     return p;
   }
@@ -387,6 +398,27 @@ public final class ProjectStore implements AutoCloseable {
   /** Counts for the whole project. */
   public ProjectSummary summary() throws ProjectFileException {
     return read(Summaries::summary);
+  }
+
+  /**
+   * Folds the write-ahead log into the file (a full checkpoint, the log emptied), so that the file
+   * alone holds the whole project, as before it is moved into place. The file stays in WAL mode
+   * (its header unchanged), so the next connection changes nothing in it merely by opening it.
+   * Needs to be the file's only connection.
+   */
+  public void foldIntoOneFile() throws ProjectFileException {
+    int busy =
+        read(
+            c -> {
+              try (Statement s = c.createStatement();
+                  ResultSet rs = s.executeQuery("PRAGMA wal_checkpoint(TRUNCATE)")) {
+                return rs.next() ? rs.getInt(1) : 1;
+              }
+            });
+    if (busy != 0) {
+      throw new ProjectFileException(
+          file + " is open in another connection; it cannot be moved into place yet");
+    }
   }
 
   /** Runs SQLite's integrity check; returns "ok" for a sound file. */

@@ -21,6 +21,7 @@ import riffle.app.ImportPreview;
 import riffle.app.ImportReport;
 import riffle.app.ImportRequest;
 import riffle.app.PhraseQuery;
+import riffle.app.Project;
 import riffle.app.SuggestionTrainer;
 import riffle.model.InputException;
 import riffle.model.ShownText;
@@ -207,6 +208,7 @@ public final class WebServer implements AutoCloseable {
         });
     cfg.routes.before(guard::check);
     cfg.routes.get("/api/project", api::project);
+    cfg.routes.get("/api/changes", api::changes);
     cfg.routes.post("/api/uploads", api::upload);
     cfg.routes.post("/api/import/preview", api::preview);
     cfg.routes.post("/api/imports", api::startImport);
@@ -297,6 +299,10 @@ public final class WebServer implements AutoCloseable {
                 out.put("summary", p.summary());
                 return out;
               }));
+    }
+
+    void changes(Context ctx) throws Exception {
+      ctx.json(Map.of("version", access.call(Project::changes)));
     }
 
     /** Streams the body to a temporary file; one declared over the limit is refused unread. */

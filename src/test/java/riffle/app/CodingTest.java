@@ -292,4 +292,21 @@ class CodingTest {
     IllegalArgumentException e = assertThrows(IllegalArgumentException.class, call::run);
     assertTrue(e.getMessage().contains(words), e.getMessage());
   }
+
+  @Test
+  void undoingATakeOffShowsInTheSearchAtOnce() throws Exception {
+    try (Project p = Project.openExisting(project)) {
+      Coding c = p.coding();
+      long late = c.create("ana", CodeDraft.named("late")).id();
+      long answer = p.answerIds().get(0);
+      c.assign("ana", answer, late, Optional.empty());
+      assertEquals(1, p.search("code:late", 10).total());
+      c.unassign("ana", answer, late);
+      assertEquals(0, p.search("code:late", 10).total());
+      c.undo("ana");
+      assertEquals(1, p.search("code:late", 10).total(), "the index took the undo");
+      c.undo("ana");
+      assertEquals(0, p.search("code:late", 10).total());
+    }
+  }
 }

@@ -48,6 +48,13 @@ class DemoProjectTest {
     DemoProject.Result again = DemoProject.prepare(dir, Progress.NONE);
     assertFalse(again.reused());
     assertEquals(DemoProject.manifest().size(), again.summary().waves().size());
-    assertFalse(Files.exists(dir.resolve(DemoProject.PROJECT + ".partial")));
+    try (var left = Files.list(dir)) {
+      assertEquals(
+          List.of(),
+          left.map(f -> f.getFileName().toString())
+              .filter(n -> n.startsWith(DemoProject.PROJECT + ".partial"))
+              .toList(),
+          "no working folder is left behind");
+    }
   }
 }

@@ -81,7 +81,9 @@ class AnswerIndexTest {
   @BeforeEach
   void build() throws Exception {
     index = AnswerIndex.open(dir.resolve("index"));
-    index.rebuild(ANSWERS, "stamp-1");
+    try (AnswerIndex.Writer w = index.tryWrite().orElseThrow()) {
+      w.rebuild(ANSWERS, "stamp-1");
+    }
   }
 
   Set<Long> ids(String query) throws Exception {
@@ -183,18 +185,57 @@ class AnswerIndexTest {
     index = AnswerIndex.open(dir.resolve("index"));
     assertEquals(Optional.empty(), index.stamp());
     assertEquals(0, index.size());
-    index.rebuild(ANSWERS, "stamp-2");
+    try (AnswerIndex.Writer w = index.tryWrite().orElseThrow()) {
+      w.rebuild(ANSWERS, "stamp-2");
+    }
     assertEquals(7, index.size());
   }
 
   @Test
   void addingAnAnswerAgainReplacesIt() throws Exception {
-    index.add(
-        List.of(answer(5, "W2-2", "Wave 2", Q1, "Shipping cost was too high", "", "desktop")),
-        "stamp-3");
+    try (AnswerIndex.Writer w = index.tryWrite().orElseThrow()) {
+      w.add(
+          List.of(answer(5, "W2-2", "Wave 2", Q1, "Shipping cost was too high", "", "desktop")),
+          "stamp-3");
+    }
     assertEquals(7, index.size());
     assertEquals(
         Set.of(2L, 5L, 7L),
         ids("is:uncoded AND question:1 AND wave:\"wave 2\" OR wave:\"wave 3\" OR late"));
+  }
+
+  @Test
+  void oneWriterAtATimeWhileSearchesGoOn() throws Exception {
+    try (AnswerIndex other = AnswerIndex.open(dir.resolve("index"));
+        AnswerIndex.Writer w = index.tryWrite().orElseThrow()) {
+      assertTrue(other.tryWrite().isEmpty(), "the second writer is refused, not let in");
+      assertEquals(Set.of(1L, 2L, 4L, 7L), ids("delivery"), "searches go on while one writes");
+      w.add(List.of(answer(8, "W3-2", "Wave 3", Q1, "Delivery was quick", "", "mobile")), "s-4");
+      assertEquals(7, other.size(), "another reader sees the new commit only when it refreshes");
+      other.refresh();
+      assertEquals(8, other.size());
+      assertEquals(Optional.of("s-4"), other.stamp());
+    }
+    try (AnswerIndex other = AnswerIndex.open(dir.resolve("index"));
+        AnswerIndex.Writer w = other.tryWrite().orElseThrow()) {
+      w.rebuild(ANSWERS, "s-5");
+    }
+    assertEquals(8, index.size(), "a reader keeps its commit until it refreshes");
+    index.refresh();
+    assertEquals(7, index.size());
+    assertEquals(Optional.of("s-5"), index.stamp());
+    assertEquals(Set.of(1L, 2L, 4L, 7L), ids("delivery"));
+  }
+
+  @Test
+  void aWriterThatFailsCommitsNothing() throws Exception {
+    AnswerIndex.Writer w = index.tryWrite().orElseThrow();
+    List<IndexedAnswer> broken = new java.util.ArrayList<>(ANSWERS);
+    broken.add(null);
+    assertThrows(NullPointerException.class, () -> w.rebuild(broken, "half"));
+    w.close();
+    index.refresh();
+    assertEquals(Optional.of("stamp-1"), index.stamp());
+    assertEquals(7, index.size(), "the half-done rebuild was dropped, not committed");
   }
 }
