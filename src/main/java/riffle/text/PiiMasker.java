@@ -171,15 +171,35 @@ public final class PiiMasker {
       new PiiMasker(PiiReferences.compile(PiiReferences.DEFAULTS), true);
 
   /** Overlap tie-break: lower ranks are more specific. */
-  private static final Map<PiiType, Integer> RANK =
-      Map.of(
-          PiiType.EMAIL, 0,
-          PiiType.URL, 1,
-          PiiType.CARD, 2,
-          PiiType.REFERENCE, 3,
-          PiiType.PHONE, 4,
-          PiiType.HANDLE, 5,
-          PiiType.NAME, 6);
+  private static final Map<PiiType, Integer> RANK = ranks();
+
+  private static Map<PiiType, Integer> ranks() {
+    List<PiiType> order =
+        List.of(
+            PiiType.EMAIL,
+            PiiType.URL,
+            PiiType.IBAN,
+            PiiType.CARD,
+            PiiType.MAC,
+            PiiType.IP,
+            PiiType.ID,
+            PiiType.DOB,
+            PiiType.REFERENCE,
+            PiiType.PLATE,
+            PiiType.ADDRESS,
+            PiiType.POSTCODE,
+            PiiType.PHONE,
+            PiiType.HANDLE,
+            PiiType.NAME);
+    Map<PiiType, Integer> out = new java.util.EnumMap<>(PiiType.class);
+    for (int i = 0; i < order.size(); i++) {
+      out.put(order.get(i), i);
+    }
+    if (out.size() != PiiType.values().length) {
+      throw new IllegalStateException("every type needs a rank");
+    }
+    return out;
+  }
 
   private static final Comparator<PiiSpan> PRECEDENCE =
       Comparator.comparingInt(PiiSpan::length)
@@ -226,6 +246,12 @@ public final class PiiMasker {
     boolean at = false;
     boolean slash = false;
     boolean dot = false;
+    boolean colon = false;
+    boolean hyphen = false;
+    boolean upperPair = false;
+    int digitRun = 0;
+    int longestDigitRun = 0;
+    char prev = 0;
     for (int i = 0; i < text.length(); i++) {
       char c = text.charAt(i);
       if (c == '@') {
@@ -234,10 +260,22 @@ public final class PiiMasker {
         slash = true;
       } else if (c == '.') {
         dot = true;
-      } else if (!digit && PiiChars.isDigit(c)) {
-        digit = true;
+      } else if (c == ':') {
+        colon = true;
+      } else if (c == '-') {
+        hyphen = true;
+      } else if (c >= 'A' && c <= 'Z' && prev >= 'A' && prev <= 'Z') {
+        upperPair = true;
       }
+      if (PiiChars.isDigit(c)) {
+        digit = true;
+        longestDigitRun = Math.max(longestDigitRun, ++digitRun);
+      } else {
+        digitRun = 0;
+      }
+      prev = c;
     }
+    PiiLexicon.Cues cues = PiiLexicon.scan(text);
     List<PiiSpan> found = new ArrayList<>();
     if (at && dot) {
       PiiAddresses.emails(text, found);
@@ -255,13 +293,27 @@ public final class PiiMasker {
     }
     if (digit) {
       PiiNumbers.find(text, found);
+      PiiBank.cardDetails(text, cues.has(PiiLexicon.CARD), found);
+      PiiBank.ibans(text, found);
+      PiiIds.ids(text, cues.has(PiiLexicon.ID), hyphen, upperPair, longestDigitRun, found);
+      if (cues.has(PiiLexicon.PLATE)) {
+        PiiIds.plates(text, found);
+      }
+      if (cues.has(PiiLexicon.DOB) || (dot && PiiChars.containsIgnoreCase(text, "d.o.b"))) {
+        PiiDates.find(text, found);
+      }
+      if (dot || colon || hyphen) {
+        PiiNetwork.find(text, colon, found);
+      }
+      if (cues.has(PiiLexicon.STREET) || cues.has(PiiLexicon.POBOX)) {
+        PiiPostal.addresses(text, cues, found);
+      }
+      PiiPostal.postcodes(text, cues, found);
     }
     if (digit || !defaultReferences) {
       PiiReferences.find(text, references, found);
     }
-    if (PiiNames.mayContain(text)) {
-      PiiNames.find(text, found);
-    }
+    PiiNames.find(text, cues.has(PiiLexicon.NAME), found);
     if (found.isEmpty()) {
       return new Masked(text, List.of());
     }
