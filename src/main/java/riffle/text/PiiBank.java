@@ -193,9 +193,81 @@ final class PiiBank {
         out.add(new PiiSpan(PiiType.CARD, c.start("v"), c.end("v")));
       }
     }
+    Matcher far = CODE_WORD.matcher(text);
+    while (far.find()) {
+      // "security code on the back of my debit card is 613": the code a little further on
+      int v = codeAfter(text, far.end(), Math.min(text.length(), far.end() + CODE_REACH));
+      if (v >= 0 && cardNear(text, far.start(), out, found)) {
+        out.add(new PiiSpan(PiiType.CARD, v, v + digitsAt(text, v)));
+      }
+    }
   }
 
-  /** A card number or a card word in the 60 characters before {@code s}. */
+  /** A security-code cue not followed by its code, for a code written a little further on. */
+  private static final Pattern CODE_WORD =
+      Pattern.compile(
+          "(?i)(?<![\\p{L}])(?:cvv2?|cvc2?|cv2|csc|security[ ]{1,3}code|card[ ]{1,3}verification"
+              + "(?:[ ]{1,3}(?:code|value|number))?)(?![\\p{L}])(?![ ]{0,3}(?:is|:|-)?[ ]{0,3}[0-9])");
+
+  /** How far after a security-code cue its code is looked for. */
+  private static final int CODE_REACH = 48;
+
+  /** Kinds of card that are not payment cards: their expiry is no card detail. */
+  private static final String[] OTHER_CARDS = {
+    "gift",
+    "loyalty",
+    "reward",
+    "membership",
+    "member",
+    "store",
+    "sim",
+    "sd",
+    "memory",
+    "business",
+    "warranty",
+    "greeting",
+    "birthday",
+    "guarantee",
+    "id",
+    "club",
+    "bonus",
+    "customer",
+    "discount"
+  };
+
+  /**
+   * Where the first lone 3- or 4-digit number in {@code [from, to)} starts, in the same sentence,
+   * or -1.
+   */
+  private static int codeAfter(String text, int from, int to) {
+    for (int i = from; i < to; i++) {
+      char c = text.charAt(i);
+      if (c == '.' || c == '!' || c == '?' || c == '\n') {
+        return -1;
+      }
+      if (isAsciiDigit(c) && !PiiChars.isWordCharBefore(text, i)) {
+        int d = digitsAt(text, i);
+        if ((d == 3 || d == 4) && !PiiChars.isWordCharAt(text, i + d)) {
+          return i;
+        }
+        i += d;
+      }
+    }
+    return -1;
+  }
+
+  private static int digitsAt(String text, int i) {
+    int e = i;
+    while (e < text.length() && isAsciiDigit(text.charAt(e))) {
+      e++;
+    }
+    return e - i;
+  }
+
+  /**
+   * A card number in the 60 characters before {@code s}, or a payment-card word in the 60
+   * characters before or the 40 after it ("Exp. 07/29 on my Mastercard").
+   */
   private static boolean cardNear(String text, int s, List<PiiSpan> out, int found) {
     for (int i = 0; i < found; i++) {
       PiiSpan p = out.get(i);
@@ -203,6 +275,9 @@ final class PiiBank {
         return true;
       }
     }
-    return PiiChars.hasWordStartingWith(text, s - 60, s, CARD_WORDS);
+    int from = Math.max(0, s - 60);
+    int to = Math.min(text.length(), s + 40);
+    return PiiChars.hasWordStartingWith(text, from, to, CARD_WORDS)
+        && !PiiChars.hasWordStartingWith(text, from, to, OTHER_CARDS);
   }
 }

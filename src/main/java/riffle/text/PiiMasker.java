@@ -313,7 +313,7 @@ public final class PiiMasker {
     if (digit || !defaultReferences) {
       PiiReferences.find(text, references, found);
     }
-    PiiNames.find(text, cues.has(PiiLexicon.NAME), found);
+    PiiNames.find(text, cues.has(PiiLexicon.NAME) || (slash && text.contains("c/o")), found);
     if (found.isEmpty()) {
       return new Masked(text, List.of());
     }

@@ -177,6 +177,37 @@ final class PiiNameCheck {
     return true; // a word the tagger never saw: "Niamh", "Halvorsen"
   }
 
+  /**
+   * Whether the tagger's dictionary knows {@code word} as an ordinary English word: its lower-case
+   * form has tags and none is a proper noun, nor is its capitalised form ("Highly", "Hours"; not
+   * "Paris", "Will").
+   */
+  static boolean isCommonWord(String word) {
+    if (Dictionary.WORDS == null) {
+      return false;
+    }
+    String[] lower = Dictionary.WORDS.getTags(word.toLowerCase(java.util.Locale.ROOT));
+    if (lower == null || hasProper(lower)) {
+      return false;
+    }
+    String[] asWritten = Dictionary.WORDS.getTags(word);
+    return asWritten == null || !hasProper(asWritten);
+  }
+
+  /** Whether the dictionary knows the lower-case {@code word} only as a common noun ("bikes"). */
+  static boolean isNounOnly(String word) {
+    String[] tags = Dictionary.WORDS == null ? null : Dictionary.WORDS.getTags(word);
+    if (tags == null) {
+      return false;
+    }
+    for (String t : tags) {
+      if (!t.equals("NN") && !t.equals("NNS")) {
+        return false;
+      }
+    }
+    return true;
+  }
+
   private static boolean hasProper(String[] tags) {
     for (String t : tags) {
       if (t.startsWith("NNP")) {
@@ -206,10 +237,16 @@ final class PiiNameCheck {
       return false;
     }
     int proper = 0;
-    for (int i = 0; i < n; i++) {
-      if (p.chunkOf()[i] != chunk) {
-        continue;
-      }
+    // the phrase around the name, cut at punctuation: "Marta , 5 Linden" is two phrases
+    int from = first;
+    while (from > 0 && p.chunkOf()[from - 1] == chunk && !punctuation(p.tags()[from - 1])) {
+      from--;
+    }
+    int to = last;
+    while (to + 1 < n && p.chunkOf()[to + 1] == chunk && !punctuation(p.tags()[to + 1])) {
+      to++;
+    }
+    for (int i = from; i <= to; i++) {
       String tag = p.tags()[i];
       if (tag.startsWith("NNP")) {
         proper++;
@@ -227,6 +264,16 @@ final class PiiNameCheck {
       }
     }
     return proper > 3;
+  }
+
+  private static boolean punctuation(String tag) {
+    return tag.equals(",")
+        || tag.equals(".")
+        || tag.equals(":")
+        || tag.equals("-LRB-")
+        || tag.equals("-RRB-")
+        || tag.equals("``")
+        || tag.equals("''");
   }
 
   private static boolean adjacent(Parse p, int last) {

@@ -22,14 +22,14 @@ final class PiiNames {
               + "|(?:(?:full|first|last|sur)\\s{0,3})?name\\s{0,3}[:=]"
               + "|ich\\s{1,3}hei(?:ß|ss)e|me\\s{1,3}llamo|mi\\s{1,3}chiamo|je\\s{1,3}m['’]appelle"
               + "|mijn\\s{1,3}naam\\s{1,3}is|ik\\s{1,3}heet)"
-              + "|(?<other>ask\\s{1,3}for|thanks\\s{1,3}to|thank\\s{1,3}you\\s{1,3}to"
+              + "|(?<other>ask\\s{1,3}for|thanks\\s{1,3}to|thank\\s{1,3}you\\s{1,3}to|c/o|care\\s{1,3}of"
               + "|(?:spoke|speak|spoken|talked|talk|chatted)\\s{1,3}(?:to|with)"
               + "|(?:kudos|props)\\s{1,3}to|shout\\s{0,3}-?\\s{0,3}outs?\\s{1,3}to"
               + "|(?:helped|served)\\s{1,3}by)"
               + "|(?<call>call\\s{1,3}me)"
               + "|(?<thanks>many\\s{1,3}thanks|thanks(?:\\s{1,3}(?:again|so\\s{1,3}much|a\\s{1,3}lot))?"
               + "|thank\\s{1,3}you(?:\\s{1,3}(?:again|so\\s{1,3}much))?|thx)"
-              + "|(?<sign>(?:(?:kind|kindest|best|warm|warmest|many)\\s{1,3})?regards|signed|cheers"
+              + "|(?<sign>(?:(?:kind|kindest|best|warm|warmest|many)\\s{1,3})?regards|signed|cheers(?:\\s{1,3}(?:mate|all|guys|folks|everyone|again))?"
               + "|best(?:\\s{1,3}wishes)?|(?:yours\\s{1,3})?sincerely|yours(?:\\s{1,3}truly)?|love"
               + "|mit\\s{1,3}freundlichen\\s{1,3}gr(?:ü|ue)(?:ß|ss)en|(?:viele|liebe|beste)\\s{1,3}gr(?:ü|ue)(?:ß|ss)e"
               + "|gru(?:ß|ss)|cordialement|(?:un\\s{1,3})?saludos?|(?:cordiali\\s{1,3})?saluti"
@@ -48,7 +48,7 @@ final class PiiNames {
           Pattern.CASE_INSENSITIVE);
 
   /** Words that may follow a name given after "this is" or "I'm". */
-  private static final Set<String> FOLLOWERS = Set.of("from", "here", "speaking", "again");
+  private static final Set<String> FOLLOWERS = Set.of("from", "here", "speaking", "again", "and");
 
   /** Words that may follow a name in a sign-off ("Cheers, Rhiannon x"). */
   private static final Set<String> SIGN_OFF_FOLLOWERS = Set.of("from", "here", "x", "xx", "xxx");
@@ -346,6 +346,20 @@ final class PiiNames {
       return;
     }
     out.add(new PiiSpan(PiiType.NAME, s, e));
+    int and = andAfter(text, e);
+    if (and > 0 && cue != Cue.I_AM && cue != Cue.THIS_IS) {
+      name(text, context, and, cue == Cue.MY_NAME ? Cue.OTHER : cue, checks, out);
+    }
+  }
+
+  /** Where a second name starts after "Lars and Birgit" or "Lars & Birgit", or -1. */
+  private static int andAfter(String text, int e) {
+    for (String joint : new String[] {" and ", " & "}) {
+      if (text.startsWith(joint, e)) {
+        return e + joint.length();
+      }
+    }
+    return -1;
   }
 
   /**
@@ -401,6 +415,9 @@ final class PiiNames {
     }
 
     private boolean usedAsThing(String word, int s, int e) {
+      if (inDomain(word)) {
+        return true; // "Thanks Ondalune! … ondalune.example"
+      }
       int from = 0;
       int at;
       int looked = 0;
@@ -414,6 +431,30 @@ final class PiiNames {
         boolean parse = parses < PARSES;
         parses += parse ? 1 : 0;
         if (PiiNameCheck.usedAsThing(text, at, end, parse)) {
+          return true;
+        }
+      }
+      return false;
+    }
+
+    /**
+     * Whether the word stands, in any case, as a label of a host name ("ondalune.example", "…@
+     * ondalune.example"), not as the local part of an e-mail address ("priya.shah@…").
+     */
+    private boolean inDomain(String word) {
+      String lower = word.toLowerCase(Locale.ROOT) + ".";
+      int at = -1;
+      while ((at = PiiChars.indexOfIgnoreCase(text, lower, at + 1, text.length())) >= 0) {
+        int after = at + lower.length();
+        char before = at > 0 ? text.charAt(at - 1) : ' ';
+        if (Character.isLetterOrDigit(before) || !PiiChars.isLetterAt(text, after)) {
+          continue;
+        }
+        int tokenEnd = after;
+        while (tokenEnd < text.length() && !Character.isWhitespace(text.charAt(tokenEnd))) {
+          tokenEnd++;
+        }
+        if (text.indexOf('@', after) < 0 || text.indexOf('@', after) >= tokenEnd) {
           return true;
         }
       }

@@ -177,11 +177,15 @@ final class PiiPostal {
 
   private static final Pattern TOWN_NO_COMMA = Pattern.compile(SP + "(?<town>" + TOWN_WORDS + ")");
 
-  private static final String REGIONS =
+  private static final String US_STATES =
       "AL|AK|AZ|AR|CA|CO|CT|DE|DC|FL|GA|HI|ID|IL|IN|IA|KS|KY|LA|ME|MD|MA|MI|MN|MS|MO|MT|NE|NV|NH"
-          + "|NJ|NM|NY|NC|ND|OH|OK|OR|PA|RI|SC|SD|TN|TX|UT|VT|VA|WA|WV|WI|WY"
-          + "|NSW|VIC|QLD|TAS|ACT|NT|SA"
-          + "|AB|BC|MB|NB|NL|NS|NU|ON|PE|QC|SK|YT";
+          + "|NJ|NM|NY|NC|ND|OH|OK|OR|PA|RI|SC|SD|TN|TX|UT|VT|VA|WA|WV|WI|WY";
+
+  private static final String AU_STATES = "NSW|VIC|QLD|WA|SA|TAS|ACT|NT";
+
+  private static final String CA_PROVINCES = "AB|BC|MB|NB|NL|NS|NT|NU|ON|PE|QC|SK|YT";
+
+  private static final String REGIONS = US_STATES + "|" + AU_STATES + "|" + CA_PROVINCES;
 
   private static final Pattern REGION =
       Pattern.compile(",?" + SP + "(?:" + REGIONS + ")(?![\\p{L}\\p{N}])");
@@ -239,9 +243,18 @@ final class PiiPostal {
               + ANY_POSTCODE.replace("(?![\\p{L}\\p{N}])", "")
               + "))(?![\\p{L}\\p{N}])");
 
-  /** UK and Canadian postcodes are distinctive enough to stand alone (upper case, with space). */
+  /**
+   * UK and Canadian postcodes are distinctive enough to stand alone (upper case, with space),
+   * except an inward code that reads as a size ("M1 8GB").
+   */
   private static final Pattern UK_OR_CA =
-      Pattern.compile("(?:" + UK.replace("[ ]?", "[ ]") + "|" + CA + ")(?![\\p{L}\\p{N}])");
+      Pattern.compile(
+          "(?:" + UK.replace("[ ]?", "[ ]") + "(?<![0-9][GTP]B)|" + CA + ")(?![\\p{L}\\p{N}])");
+
+  /** Words that, just before a UK-shaped code, make it a model or part number ("Model SN1 2AB"). */
+  private static final String[] MODEL_WORDS = {
+    "model", "part", "serial", "sku", "type", "item", "article", "version", "code"
+  };
 
   /** A numeric postcode before its town: "10115 Berlin", "D-10115 Berlin", "1016 GV Amsterdam". */
   private static final Pattern NUMERIC_BEFORE_TOWN =
@@ -254,16 +267,28 @@ final class PiiPostal {
               + CAPW
               + "))");
 
-  /** After a state or region: "IL 62704", "NSW 2000", "ON M5V 2T6". */
+  /**
+   * After a state or region, itself after a comma or a town: "Kestrel, IA 50432" (USPS: ZIP after
+   * the state), "Wollowra NSW 2317" (Australia Post: four digits after the state), "Elmsford, ON
+   * L4T 2K9" (Canada Post: after the province).
+   */
   private static final Pattern AFTER_REGION =
       Pattern.compile(
-          "(?<![\\p{L}\\p{N}])(?:"
-              + REGIONS
+          "(?<=(?:,|\\p{Lu}\\p{Ll}{1,30})[ ]{1,2})(?:(?:"
+              + US_STATES
               + ")"
               + SP
-              + "(?<pc>[0-9]{5}(?:-[0-9]{4})?|[0-9]{4}|"
+              + "(?<zip>[0-9]{5}(?:-[0-9]{4})?)|(?:"
+              + AU_STATES
+              + ")"
+              + SP
+              + "(?<au>[0-9]{4})|(?:"
+              + CA_PROVINCES
+              + ")"
+              + SP
+              + "(?<ca>"
               + CA
-              + ")(?![\\p{L}\\p{N}])");
+              + "))(?![\\p{L}\\p{N}])");
 
   /** Cue phrases after which an address may be written in lower case. */
   private static final Pattern PLACE_CUE =
@@ -330,7 +355,7 @@ final class PiiPostal {
           break;
         }
         from = m.start() + 1;
-        if (m.end() < we || (cue && !plainWords(m.group("words")))) {
+        if (m.end() < we || (cue && !plainWords(m.group("words"))) || nounAfter(text, m.end())) {
           continue;
         }
         Tail t = tail(text, m.end());
@@ -419,6 +444,26 @@ final class PiiPostal {
     }
     int v = Integer.parseInt(text.substring(s, e));
     return v >= 1900 && v <= 2099;
+  }
+
+  /**
+   * Whether a lower-case common noun follows the street word, which makes it a modifier: "12 Oak
+   * Road bikes", "2 Street food vans".
+   */
+  private static boolean nounAfter(String text, int e) {
+    int p = e;
+    if (p >= text.length() || !PiiChars.isInlineSpace(text.charAt(p))) {
+      return false;
+    }
+    p++;
+    int q = p;
+    while (q < text.length() && Character.isLowerCase(text.charAt(q))) {
+      q++;
+    }
+    if (q == p || PiiChars.isWordCharAt(text, q)) {
+      return false;
+    }
+    return PiiNameCheck.isNounOnly(text.substring(p, q));
   }
 
   /** Words of a lower-case street name: none of them a joining word ("12 and the road"). */
@@ -533,7 +578,9 @@ final class PiiPostal {
     String town = m.group("town");
     int space = town.indexOf(' ');
     String first = (space < 0 ? town : town.substring(0, space)).toLowerCase(Locale.ROOT);
-    if (PiiLexicon.NOT_NAMES.contains(first) || first.length() < 2) {
+    if (PiiLexicon.NOT_NAMES.contains(first)
+        || first.length() < 2
+        || PiiNameCheck.isCommonWord(space < 0 ? town : town.substring(0, space))) {
       return at;
     }
     return m.end();
@@ -567,7 +614,7 @@ final class PiiPostal {
       if (c >= 'A' && c <= 'Z' && i + 2 < n) {
         if (PiiChars.isDigitAt(text, i + 1) || PiiChars.isDigitAt(text, i + 2)) {
           uk.region(i, n);
-          if (uk.lookingAt()) {
+          if (uk.lookingAt() && !PiiChars.hasWordStartingWith(text, i - 16, i, MODEL_WORDS)) {
             out.add(new PiiSpan(PiiType.POSTCODE, i, uk.end()));
             continue;
           }
@@ -575,7 +622,9 @@ final class PiiPostal {
         if (i + 3 < n && text.charAt(i + 2) == ' ' || i + 4 < n && text.charAt(i + 3) == ' ') {
           region.region(i, n);
           if (region.lookingAt()) {
-            out.add(new PiiSpan(PiiType.POSTCODE, region.start("pc"), region.end("pc")));
+            String g =
+                region.group("zip") != null ? "zip" : region.group("au") != null ? "au" : "ca";
+            out.add(new PiiSpan(PiiType.POSTCODE, region.start(g), region.end(g)));
           }
         }
       } else if (c >= '0' && c <= '9' && startsNumber(text, i)) {
@@ -619,7 +668,8 @@ final class PiiPostal {
     return w.length() >= 2
         && !PiiLexicon.NOT_NAMES.contains(w)
         && !PiiNumbers.isUnitWord(w)
-        && !NOT_TOWNS.contains(w);
+        && !NOT_TOWNS.contains(w)
+        && !PiiNameCheck.isCommonWord(text.substring(s, e));
   }
 
   /** Capitalised words that follow a number and are no town. */
