@@ -52,6 +52,26 @@ final class PiiLexicon {
   /** A postcode cue word ("postcode", "zip", "PLZ" …). */
   static final int POSTCODE = 1 << 8;
 
+  /**
+   * A reference cue word ("receipt", "tracking" …) or a word starting like a reference prefix (ord,
+   * inv, rma, ret, ref, trk, tkt: "ORD-48213", "invoice", "REF5521").
+   */
+  static final int REFERENCE = 1 << 9;
+
+  /** The word "dot" (an e-mail address spelled out: "jonas at example dot com"). */
+  static final int SPELLED = 1 << 10;
+
+  /** Hashes of the first three letters of the reference prefixes. */
+  private static final long[] PREFIXES = {
+    prefixHash("ord"),
+    prefixHash("inv"),
+    prefixHash("rma"),
+    prefixHash("ret"),
+    prefixHash("ref"),
+    prefixHash("trk"),
+    prefixHash("tkt")
+  };
+
   private static final Map<String, Integer> FAMILY_NAMES =
       Map.of(
           "name", NAME,
@@ -61,7 +81,9 @@ final class PiiLexicon {
           "plate", PLATE,
           "pobox", POBOX,
           "place", PLACE,
-          "postcode", POSTCODE);
+          "postcode", POSTCODE,
+          "reference", REFERENCE,
+          "spelled", SPELLED);
 
   /** Kinds of street words; see {@code street-words.txt}. */
   enum StreetKind {
@@ -176,23 +198,48 @@ final class PiiLexicon {
     int n = text.length();
     int i = 0;
     while (i < n) {
-      int cp = text.codePointAt(i);
-      if (!PiiChars.isLetterOrMark(cp)) {
-        i += Character.charCount(cp);
+      char ch = text.charAt(i);
+      if (ch < 0x80 ? !isAsciiLetter(ch) : !PiiChars.isLetterOrMark(text.codePointAt(i))) {
+        i += ch < 0x80 ? 1 : Character.charCount(text.codePointAt(i));
         continue;
       }
       int start = i;
       long h = OFFSET;
+      long prefix = 0;
       while (i < n) {
-        cp = text.codePointAt(i);
-        if (PiiChars.isLetterOrMark(cp)) {
-          h = step(h, Character.toLowerCase(cp));
-          i += Character.charCount(cp);
-        } else if ((cp == '\'' || cp == '’') && PiiChars.isLetterAt(text, i + 1)) {
-          h = step(h, '\'');
-          i++;
+        char c = text.charAt(i);
+        if (c < 0x80) {
+          if (isAsciiLetter(c)) {
+            h = step(h, c | 0x20);
+            i++;
+            if (i - start == 3) {
+              prefix = h;
+            }
+          } else if (c == '\'' && PiiChars.isLetterAt(text, i + 1)) {
+            h = step(h, '\'');
+            i++;
+          } else {
+            break;
+          }
         } else {
-          break;
+          int cp = text.codePointAt(i);
+          if (PiiChars.isLetterOrMark(cp)) {
+            h = step(h, Character.toLowerCase(cp));
+            i += Character.charCount(cp);
+          } else if (cp == '’' && PiiChars.isLetterAt(text, i + 1)) {
+            h = step(h, '\'');
+            i++;
+          } else {
+            break;
+          }
+        }
+      }
+      if (prefix != 0 && (cues.families & REFERENCE) == 0) {
+        for (long p : PREFIXES) {
+          if (p == prefix) {
+            cues.families |= REFERENCE;
+            break;
+          }
         }
       }
       int family = lookup(h);
@@ -207,6 +254,10 @@ final class PiiLexicon {
       }
     }
     return cues;
+  }
+
+  private static boolean isAsciiLetter(char c) {
+    return (c | 0x20) >= 'a' && (c | 0x20) <= 'z';
   }
 
   /** After a word: an optional dot, spaces or a comma, then a digit ("Hauptstr. 5"). */
@@ -265,6 +316,14 @@ final class PiiLexicon {
     long x = h ^ cp;
     x *= 0x100000001b3L;
     return x == 0 ? 1 : x;
+  }
+
+  private static long prefixHash(String three) {
+    long h = OFFSET;
+    for (int i = 0; i < 3; i++) {
+      h = step(h, three.charAt(i));
+    }
+    return h;
   }
 
   private static long hash(String s, int from, int to) {

@@ -249,6 +249,9 @@ public final class PiiMasker {
     boolean colon = false;
     boolean hyphen = false;
     boolean upperPair = false;
+    boolean lineBreak = false;
+    boolean closer = false;
+    int digits = 0;
     int digitRun = 0;
     int longestDigitRun = 0;
     char prev = 0;
@@ -264,11 +267,16 @@ public final class PiiMasker {
         colon = true;
       } else if (c == '-') {
         hyphen = true;
+      } else if (c == '\n' || c == '\r' || c == '\u2028' || c == '\u2029') {
+        lineBreak = true;
+      } else if (c == ']' || c == ')' || c == '}') {
+        closer = true;
       } else if (c >= 'A' && c <= 'Z' && prev >= 'A' && prev <= 'Z') {
         upperPair = true;
       }
       if (PiiChars.isDigit(c)) {
         digit = true;
+        digits++;
         longestDigitRun = Math.max(longestDigitRun, ++digitRun);
       } else {
         digitRun = 0;
@@ -283,7 +291,7 @@ public final class PiiMasker {
     if (at) {
       PiiAddresses.handles(text, found);
     }
-    if (maySpellAnAddress(text, at, dot)) {
+    if (maySpellAnAddress(text, at, dot, closer, cues.has(PiiLexicon.SPELLED))) {
       PiiAddresses.spelledEmails(text, found);
     }
     boolean scheme = slash && text.contains("://");
@@ -310,29 +318,36 @@ public final class PiiMasker {
       }
       PiiPostal.postcodes(text, cues, found);
     }
-    if (digit || !defaultReferences) {
+    if (!defaultReferences) {
       PiiReferences.find(text, references, found);
+    } else if (digit) {
+      PiiReferences.findDefaults(
+          text, references, cues.has(PiiLexicon.REFERENCE), digits >= 8, found);
     }
-    PiiNames.find(text, cues.has(PiiLexicon.NAME) || (slash && text.contains("c/o")), found);
+    PiiNames.find(
+        text, cues.has(PiiLexicon.NAME) || (slash && text.contains("c/o")), lineBreak, found);
     if (found.isEmpty()) {
       return new Masked(text, List.of());
     }
     return build(text, resolve(found));
   }
 
-  private static boolean maySpellAnAddress(String text, boolean at, boolean dot) {
-    boolean spelledDot = PiiChars.containsIgnoreCase(text, "dot");
+  /**
+   * Whether an e-mail address may be spelled out: "dot" as a word with an {@code @}, or without one
+   * "at" in brackets, or " at " with "dot" or a dot.
+   */
+  private static boolean maySpellAnAddress(
+      String text, boolean at, boolean dot, boolean closer, boolean spelledDot) {
     if (at) {
       return spelledDot;
     }
-    boolean bracketAt =
-        PiiChars.containsIgnoreCase(text, "at]")
+    if (closer
+        && (PiiChars.containsIgnoreCase(text, "at]")
             || PiiChars.containsIgnoreCase(text, "at)")
-            || PiiChars.containsIgnoreCase(text, "at}");
-    if (bracketAt) {
+            || PiiChars.containsIgnoreCase(text, "at}"))) {
       return true;
     }
-    return PiiChars.containsIgnoreCase(text, " at ") && (spelledDot || dot);
+    return (spelledDot || dot) && PiiChars.containsIgnoreCase(text, " at ");
   }
 
   /** The longest candidates first, ties to the more specific type; overlapping ones dropped. */

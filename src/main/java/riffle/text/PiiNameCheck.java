@@ -20,9 +20,16 @@ import opennlp.tools.util.Span;
  */
 final class PiiNameCheck {
   /** Characters of context parsed before and after the candidate. */
-  private static final int BEFORE = 120;
+  private static final int BEFORE = 60;
 
-  private static final int AFTER = 80;
+  private static final int AFTER = 40;
+
+  /** Parsed stretches kept, by their text, before the cache is cleared and refilled. */
+  static final int CACHE_LIMIT = 20_000;
+
+  /** Parses of stretches of text (offsets relative to the stretch); survey answers repeat. */
+  private static final java.util.concurrent.ConcurrentHashMap<String, Parse> CACHE =
+      new java.util.concurrent.ConcurrentHashMap<>();
 
   private static final ThreadLocal<Tools> TOOLS = ThreadLocal.withInitial(Tools::new);
 
@@ -79,6 +86,26 @@ final class PiiNameCheck {
       to++;
     }
     String window = text.substring(from, to);
+    Parse relative = CACHE.get(window);
+    if (relative == null) {
+      relative = parseWindow(window);
+      if (CACHE.size() >= CACHE_LIMIT) {
+        CACHE.clear();
+      }
+      CACHE.put(window, relative);
+    }
+    int k = relative.starts().length;
+    int[] starts = new int[k];
+    int[] ends = new int[k];
+    for (int i = 0; i < k; i++) {
+      starts[i] = from + relative.starts()[i];
+      ends[i] = from + relative.ends()[i];
+    }
+    return new Parse(
+        text, starts, ends, relative.tags(), relative.chunkOf(), relative.chunkTypes());
+  }
+
+  private static Parse parseWindow(String window) {
     Tools t = TOOLS.get();
     Span[] spans = Pipeline.keepSurrogatePairs(t.tokenizer.tokenizePos(window), window);
     String[] tokens = Span.spansToStrings(spans, window);
@@ -91,15 +118,15 @@ final class PiiNameCheck {
     String[] types = new String[chunks.length];
     for (int c = 0; c < chunks.length; c++) {
       types[c] = chunks[c].getType();
-      for (int k = chunks[c].getStart(); k < chunks[c].getEnd(); k++) {
-        chunkOf[k] = c;
+      for (int i = chunks[c].getStart(); i < chunks[c].getEnd(); i++) {
+        chunkOf[i] = c;
       }
     }
     for (int i = 0; i < tokens.length; i++) {
-      starts[i] = from + spans[i].getStart();
-      ends[i] = from + spans[i].getEnd();
+      starts[i] = spans[i].getStart();
+      ends[i] = spans[i].getEnd();
     }
-    return new Parse(text, starts, ends, tags, chunkOf, types);
+    return new Parse(window, starts, ends, tags, chunkOf, types);
   }
 
   private static boolean sentenceBreak(char c) {

@@ -102,7 +102,10 @@ final class PiiNames {
    * Adds the names found after cues (when {@code cues} says the answer holds a cue word) and on a
    * sign-off last line, then every other place in the answer where the same name words stand.
    */
-  static void find(String text, boolean cues, List<PiiSpan> out) {
+  static void find(String text, boolean cues, boolean lineBreak, List<PiiSpan> out) {
+    if (!cues && !lineBreak) {
+      return;
+    }
     int before = out.size();
     Checks checks = new Checks(text);
     if (cues) {
@@ -119,10 +122,12 @@ final class PiiNames {
         name(text, m.start(), q, cue, checks, out);
       }
     }
-    if (hasLineBreak(text)) {
+    if (lineBreak) {
       lastLine(text, checks, out);
     }
-    propagate(text, before, out);
+    if (out.size() > before) {
+      propagate(text, before, out);
+    }
   }
 
   private static Cue cueOf(Matcher m) {
@@ -375,8 +380,8 @@ final class PiiNames {
     static final int PLACES = 6;
 
     final String text;
-    final java.util.Map<String, Integer> confirmed = new java.util.HashMap<>();
-    final java.util.Map<String, Boolean> things = new java.util.HashMap<>();
+    final java.util.Map<String, Integer> confirmed = new java.util.HashMap<>(4);
+    final java.util.Map<String, Boolean> things = new java.util.HashMap<>(4);
     int parses;
 
     Checks(String text) {
@@ -584,15 +589,6 @@ final class PiiNames {
     }
     Word next = Word.at(text, f);
     return next != null && f > e && followers.contains(next.lower);
-  }
-
-  private static boolean hasLineBreak(String text) {
-    for (int i = 0; i < text.length(); i++) {
-      if (isLineBreak(text.charAt(i))) {
-        return true;
-      }
-    }
-    return false;
   }
 
   private static boolean isLineBreak(char c) {

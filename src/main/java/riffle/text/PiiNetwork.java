@@ -21,7 +21,13 @@ final class PiiNetwork {
     int n = text.length();
     for (int i = 0; i < n; i++) {
       char c = text.charAt(i);
-      if (!isHex(c) || PiiChars.isWordCharBefore(text, i)) {
+      if (!isHex(c)) {
+        continue;
+      }
+      if (i > 0 && isAsciiLetterOrDigit(text.charAt(i - 1)) || PiiChars.isWordCharBefore(text, i)) {
+        while (i + 1 < n && isAsciiLetterOrDigit(text.charAt(i + 1))) {
+          i++; // the rest of this word
+        }
         continue;
       }
       char before = i > 0 ? text.charAt(i - 1) : ' ';
@@ -181,6 +187,10 @@ final class PiiNetwork {
       }
     }
     return -1;
+  }
+
+  private static boolean isAsciiLetterOrDigit(char c) {
+    return (c >= '0' && c <= '9') || ((c | 0x20) >= 'a' && (c | 0x20) <= 'z');
   }
 
   private static boolean isHex(char c) {

@@ -600,19 +600,19 @@ final class PiiPostal {
       }
     }
     int n = text.length();
-    Matcher uk = UK_OR_CA.matcher(text);
-    uk.useTransparentBounds(true);
-    Matcher town = NUMERIC_BEFORE_TOWN.matcher(text);
-    town.useTransparentBounds(true);
-    Matcher region = AFTER_REGION.matcher(text);
-    region.useTransparentBounds(true);
+    Matcher uk = null;
+    Matcher town = null;
+    Matcher region = null;
     for (int i = 0; i < n; i++) {
       char c = text.charAt(i);
-      if (PiiChars.isWordCharBefore(text, i)) {
+      boolean upper = c >= 'A' && c <= 'Z';
+      boolean digit = c >= '0' && c <= '9';
+      if (!upper && !digit || PiiChars.isWordCharBefore(text, i)) {
         continue;
       }
-      if (c >= 'A' && c <= 'Z' && i + 2 < n) {
+      if (upper && i + 2 < n) {
         if (PiiChars.isDigitAt(text, i + 1) || PiiChars.isDigitAt(text, i + 2)) {
+          uk = uk == null ? transparent(UK_OR_CA, text) : uk;
           uk.region(i, n);
           if (uk.lookingAt() && !PiiChars.hasWordStartingWith(text, i - 16, i, MODEL_WORDS)) {
             out.add(new PiiSpan(PiiType.POSTCODE, i, uk.end()));
@@ -620,6 +620,7 @@ final class PiiPostal {
           }
         }
         if (i + 3 < n && text.charAt(i + 2) == ' ' || i + 4 < n && text.charAt(i + 3) == ' ') {
+          region = region == null ? transparent(AFTER_REGION, text) : region;
           region.region(i, n);
           if (region.lookingAt()) {
             String g =
@@ -627,7 +628,8 @@ final class PiiPostal {
             out.add(new PiiSpan(PiiType.POSTCODE, region.start(g), region.end(g)));
           }
         }
-      } else if (c >= '0' && c <= '9' && startsNumber(text, i)) {
+      } else if (digit && startsNumber(text, i) && digitsThenTown(text, i)) {
+        town = town == null ? transparent(NUMERIC_BEFORE_TOWN, text) : town;
         town.region(i, n);
         if (town.lookingAt() && plausibleTown(text, town.start("town"), town.end("town"))) {
           out.add(new PiiSpan(PiiType.POSTCODE, i, town.end()));
@@ -635,12 +637,29 @@ final class PiiPostal {
       } else if ((c == 'D' || c == 'F' || c == 'E' || c == 'I' || c == 'A' || c == 'B' || c == 'L')
           && i + 1 < n
           && text.charAt(i + 1) == '-') {
+        town = town == null ? transparent(NUMERIC_BEFORE_TOWN, text) : town;
         town.region(i, n);
         if (town.lookingAt() && plausibleTown(text, town.start("town"), town.end("town"))) {
           out.add(new PiiSpan(PiiType.POSTCODE, i, town.end()));
         }
       }
     }
+  }
+
+  private static Matcher transparent(Pattern p, String text) {
+    Matcher m = p.matcher(text);
+    m.useTransparentBounds(true);
+    return m;
+  }
+
+  /** Four or five digits, a space (and for four, two capitals): the shape before a town. */
+  private static boolean digitsThenTown(String text, int i) {
+    int e = i;
+    while (e < text.length() && e - i < 6 && PiiChars.isDigitAt(text, e)) {
+      e++;
+    }
+    int d = e - i;
+    return (d == 4 || d == 5) && e < text.length() && PiiChars.isInlineSpace(text.charAt(e));
   }
 
   /** A number not glued to a price, a decimal or a list ("€10115", "1.10115", "3,10115"). */

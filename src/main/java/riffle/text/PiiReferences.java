@@ -95,6 +95,21 @@ final class PiiReferences {
   }
 
   /**
+   * Adds the matches of the default patterns ({@code refs} compiled from {@link #DEFAULTS}), each
+   * run only when the answer can hold one: the first two need a reference word or prefix ({@code
+   * cue}), the third eight digits ({@code eightDigits}).
+   */
+  static void findDefaults(
+      String text, List<Ref> refs, boolean cue, boolean eightDigits, List<PiiSpan> out) {
+    if (cue) {
+      find(text, refs.subList(0, 2), out);
+    }
+    if (eightDigits) {
+      find(text, refs.subList(2, 3), out);
+    }
+  }
+
+  /**
    * Adds every match of every pattern; only the "ref" group when the pattern has one and it took
    * part. A pattern that overflows the regular-expression engine's stack on this text (possible
    * only with an analyst's own, deeply nested pattern on a very long answer) is skipped for it.
