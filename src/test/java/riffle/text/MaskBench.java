@@ -49,10 +49,10 @@ public final class MaskBench {
     int runs = args.length > 1 ? Integer.parseInt(args[1]) : 21;
     List<String> demo = demoAnswers(Path.of("sample-responses"));
     List<String> planted = new ArrayList<>();
-    for (PiiPlantedTest.Answer a : PiiPlantedTest.planted()) {
+    for (PlantedFixture.Answer a : PlantedFixture.planted()) {
       planted.add(a.text());
     }
-    List<String> ordinary = PiiPlantedTest.ordinary();
+    List<String> ordinary = PlantedFixture.ordinary();
     MethodHandle old = oldMasker(Path.of(args[0]));
     PiiMasker current = PiiMasker.standard();
     System.out.printf(

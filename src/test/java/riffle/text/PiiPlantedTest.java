@@ -1,12 +1,9 @@
 package riffle.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.EnumSet;
@@ -25,76 +22,16 @@ import riffle.model.PiiType;
  * per 1,000 ordinary answers.
  */
 class PiiPlantedTest {
-  /** One planted piece: its kind and where it stands in the answer. */
-  record Planted(PiiType type, int start, int end, String value) {}
-
-  /** One answer of the planted fixture: its text and its planted pieces. */
-  record Answer(int line, String text, List<Planted> planted) {}
-
-  static List<Answer> planted() throws IOException {
-    List<Answer> out = new ArrayList<>();
-    List<String> lines = lines("pii/planted.txt");
-    for (int i = 0; i < lines.size(); i++) {
-      String raw = lines.get(i);
-      if (raw.isBlank() || raw.startsWith("#")) {
-        continue;
-      }
-      out.add(parse(i + 1, raw.replace("\\n", "\n")));
-    }
-    return out;
-  }
-
-  /** The ordinary answers, "\n" read as a line break. */
-  static List<String> ordinary() throws IOException {
-    List<String> out = new ArrayList<>();
-    for (String raw : lines("pii/ordinary.txt")) {
-      if (!raw.isBlank() && !raw.startsWith("#")) {
-        out.add(raw.replace("\\n", "\n"));
-      }
-    }
-    return out;
-  }
-
-  private static Answer parse(int line, String marked) {
-    StringBuilder text = new StringBuilder();
-    List<Planted> planted = new ArrayList<>();
-    int i = 0;
-    while (i < marked.length()) {
-      int open = marked.indexOf('⟦', i);
-      if (open < 0) {
-        text.append(marked, i, marked.length());
-        break;
-      }
-      text.append(marked, i, open);
-      int bar = marked.indexOf('|', open);
-      int close = marked.indexOf('⟧', open);
-      assertTrue(bar > open && close > bar, "planted.txt line " + line + ": unclosed mark");
-      PiiType type = PiiType.valueOf(marked.substring(open + 1, bar).toUpperCase(Locale.ROOT));
-      String value = marked.substring(bar + 1, close);
-      planted.add(new Planted(type, text.length(), text.length() + value.length(), value));
-      text.append(value);
-      i = close + 1;
-    }
-    return new Answer(line, text.toString(), planted);
-  }
-
-  private static List<String> lines(String name) throws IOException {
-    try (InputStream in = PiiPlantedTest.class.getResourceAsStream(name)) {
-      assertNotNull(in, name + " is missing");
-      return List.of(new String(in.readAllBytes(), StandardCharsets.UTF_8).split("\n", -1));
-    }
-  }
-
   @Test
   void everyPlantedPieceIsMaskedWithItsTypeAndNothingElse() throws IOException {
-    List<Answer> answers = planted();
+    List<PlantedFixture.Answer> answers = PlantedFixture.planted();
     assertTrue(answers.size() >= 150, "planted answers: " + answers.size());
     Map<PiiType, int[]> counts = new EnumMap<>(PiiType.class);
     List<String> problems = new ArrayList<>();
-    for (Answer a : answers) {
+    for (PlantedFixture.Answer a : answers) {
       PiiMasker.Masked m = PiiMasker.standard().mask(a.text());
       PiiMaskerTest.assertInvariants(a.text(), m);
-      for (Planted p : a.planted()) {
+      for (PlantedFixture.Planted p : a.planted()) {
         int[] c = counts.computeIfAbsent(p.type(), t -> new int[3]);
         Set<PiiType> covering = EnumSet.noneOf(PiiType.class);
         int covered = 0;
@@ -156,7 +93,7 @@ class PiiPlantedTest {
 
   @Test
   void ordinaryAnswersComeThroughUnchanged() throws IOException {
-    List<String> answers = ordinary();
+    List<String> answers = PlantedFixture.ordinary();
     assertTrue(answers.size() >= 200, "ordinary answers: " + answers.size());
     List<String> masked = new ArrayList<>();
     int falseMasks = 0;
