@@ -300,6 +300,12 @@ final class PiiPostal {
               + "|wohne[ ]{1,3}in|j['’]habite(?:[ ]{1,3}au)?|vivo[ ]{1,3}en|abito[ ]{1,3}in|woon[ ]{1,3}op)"
               + "(?![\\p{L}])");
 
+  /** Street words that are abbreviations and may take a dot ("St.", "Rd."). */
+  private static final java.util.Set<String> ABBREVIATIONS =
+      java.util.Set.of(
+          "st", "rd", "ave", "av", "ln", "dr", "blvd", "cres", "tce", "gdns", "pkwy", "hwy", "tpke",
+          "ct", "pl", "sq", "cir");
+
   /** Words that never stand inside a street name written in lower case. */
   private static final java.util.Set<String> GLUE =
       java.util.Set.of(
@@ -358,14 +364,20 @@ final class PiiPostal {
         if (m.end() < we || (cue && !plainWords(m.group("words"))) || nounAfter(text, m.end())) {
           continue;
         }
-        Tail t = tail(text, m.end());
+        int end = m.end();
+        String streetWord = m.group("after") != null ? m.group("after") : m.group("weak");
+        if (text.charAt(end - 1) == '.'
+            && !ABBREVIATIONS.contains(streetWord.toLowerCase(Locale.ROOT))) {
+          end--; // "Quillon Street." ends a sentence; "Elm St." is abbreviated
+        }
+        Tail t = tail(text, end);
         if (m.group("after") != null || t.extended || cue) {
           out.add(new PiiSpan(PiiType.ADDRESS, unitStart(text, m.start()), t.end));
           int name = m.start();
           while (name < m.end() && !PiiChars.isInlineSpace(text.charAt(name))) {
             name++;
           }
-          streets.add(text.substring(name, m.end()).strip());
+          streets.add(text.substring(name, end).strip());
         }
         break;
       }
@@ -619,6 +631,18 @@ final class PiiPostal {
             continue;
           }
         }
+        boolean prefix =
+            i + 1 < n && text.charAt(i + 1) == '-' && "DFEIABL".indexOf(c) >= 0
+                || text.startsWith("NL-", i)
+                || text.startsWith("CH-", i);
+        if (prefix) {
+          town = town == null ? transparent(NUMERIC_BEFORE_TOWN, text) : town;
+          town.region(i, n);
+          if (town.lookingAt() && plausibleTown(text, town.start("town"), town.end("town"))) {
+            out.add(new PiiSpan(PiiType.POSTCODE, i, town.end()));
+          }
+          continue;
+        }
         if (i + 3 < n && text.charAt(i + 2) == ' ' || i + 4 < n && text.charAt(i + 3) == ' ') {
           region = region == null ? transparent(AFTER_REGION, text) : region;
           region.region(i, n);
@@ -629,14 +653,6 @@ final class PiiPostal {
           }
         }
       } else if (digit && startsNumber(text, i) && digitsThenTown(text, i)) {
-        town = town == null ? transparent(NUMERIC_BEFORE_TOWN, text) : town;
-        town.region(i, n);
-        if (town.lookingAt() && plausibleTown(text, town.start("town"), town.end("town"))) {
-          out.add(new PiiSpan(PiiType.POSTCODE, i, town.end()));
-        }
-      } else if ((c == 'D' || c == 'F' || c == 'E' || c == 'I' || c == 'A' || c == 'B' || c == 'L')
-          && i + 1 < n
-          && text.charAt(i + 1) == '-') {
         town = town == null ? transparent(NUMERIC_BEFORE_TOWN, text) : town;
         town.region(i, n);
         if (town.lookingAt() && plausibleTown(text, town.start("town"), town.end("town"))) {
