@@ -38,8 +38,10 @@ public enum PiiType {
   /** A vehicle licence plate after a cue ("reg", "number plate", "Kennzeichen" …). */
   PLATE;
 
+  private final String placeholder = "[" + name().toLowerCase(Locale.ROOT) + "]";
+
   /** The text that replaces the personal data in masked text, such as {@code [email]}. */
   public String placeholder() {
-    return "[" + name().toLowerCase(Locale.ROOT) + "]";
+    return placeholder;
   }
 }

@@ -77,7 +77,7 @@ final class PiiIds {
       String text,
       boolean cues,
       boolean hyphen,
-      boolean upperPair,
+      boolean lettersThenDigit,
       int longestDigitRun,
       List<PiiSpan> out) {
     if (cues) {
@@ -95,7 +95,7 @@ final class PiiIds {
         out.add(new PiiSpan(PiiType.ID, m.start(), m.end()));
       }
     }
-    if (upperPair) {
+    if (lettersThenDigit) {
       Matcher nino = NINO.matcher(text);
       while (nino.find()) {
         out.add(new PiiSpan(PiiType.ID, nino.start(), nino.end()));

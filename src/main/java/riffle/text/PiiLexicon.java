@@ -61,6 +61,9 @@ final class PiiLexicon {
   /** The word "dot" (an e-mail address spelled out: "jonas at example dot com"). */
   static final int SPELLED = 1 << 10;
 
+  /** The word "at" (the same). */
+  static final int AT = 1 << 11;
+
   /** Hashes of the first three letters of the reference prefixes. */
   private static final long[] PREFIXES = {
     prefixHash("ord"),
@@ -73,17 +76,18 @@ final class PiiLexicon {
   };
 
   private static final Map<String, Integer> FAMILY_NAMES =
-      Map.of(
-          "name", NAME,
-          "dob", DOB,
-          "card", CARD,
-          "id", ID,
-          "plate", PLATE,
-          "pobox", POBOX,
-          "place", PLACE,
-          "postcode", POSTCODE,
-          "reference", REFERENCE,
-          "spelled", SPELLED);
+      Map.ofEntries(
+          Map.entry("name", NAME),
+          Map.entry("dob", DOB),
+          Map.entry("card", CARD),
+          Map.entry("id", ID),
+          Map.entry("plate", PLATE),
+          Map.entry("pobox", POBOX),
+          Map.entry("place", PLACE),
+          Map.entry("postcode", POSTCODE),
+          Map.entry("reference", REFERENCE),
+          Map.entry("spelled", SPELLED),
+          Map.entry("at", AT));
 
   /** Kinds of street words; see {@code street-words.txt}. */
   enum StreetKind {

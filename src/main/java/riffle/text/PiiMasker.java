@@ -105,16 +105,16 @@ import riffle.model.PiiType;
  *       three further {@code -} or {@code /} parts: {@code ORD-48213}, {@code INV-2026-0042}); a
  *       cue word (order, invoice, receipt, rma, ticket, reference, ref, booking, confirmation,
  *       tracking, parcel, shipment, consignment, waybill, account, customer, member, membership,
- *       loyalty), an optional "no."/"number"/"id"/"code",
- *       an optional ":", "#", "is" or "was", then a code of 4 to 40 letters, digits and inner
- *       hyphens with four digits in a row near its start ({@code order #48213}, {@code order number
- *       is 48213}, {@code tracking JD014600006281}) — only the code is masked, the cue words stay
- *       readable; and a carrier-style code of 10 to 30 upper-case letters and digits with at least
- *       one letter and at least eight digits ({@code 1Z999AA10123456784}, {@code RR123456785GB}).
- *       {@link #withReferencePatterns(List)} replaces all three. A pattern with a group named
- *       {@code ref} masks only that group (when it took part in the match); otherwise the whole
- *       match. Patterns are Java regular expressions used as written (add {@code (?i)} for any
- *       case); empty matches are ignored.
+ *       loyalty), an optional "no."/"number"/"id"/"code", an optional ":", "#", "is" or "was", then
+ *       a code of 4 to 40 letters, digits and inner hyphens with four digits in a row near its
+ *       start ({@code order #48213}, {@code order number is 48213}, {@code tracking
+ *       JD014600006281}) — only the code is masked, the cue words stay readable; and a
+ *       carrier-style code of 10 to 30 upper-case letters and digits with at least one letter and
+ *       at least eight digits ({@code 1Z999AA10123456784}, {@code RR123456785GB}). {@link
+ *       #withReferencePatterns(List)} replaces all three. A pattern with a group named {@code ref}
+ *       masks only that group (when it took part in the match); otherwise the whole match. Patterns
+ *       are Java regular expressions used as written (add {@code (?i)} for any case); empty matches
+ *       are ignored.
  *   <dt>Handles
  *   <dd>{@code @name} where the {@code @} does not follow a letter, digit or address character (so
  *       never part of an e-mail address) and is followed by a letter or underscore, then letters,
@@ -250,8 +250,8 @@ import riffle.model.PiiType;
  *       check and is masked as a card.
  *   <li>An IBAN that fails its check (a typing error) or belongs to a country not in {@code
  *       iban-lengths.txt} is not masked as an IBAN; its digits may still be masked as a phone
- *       number. A national account number without its IBAN is masked as a reference after
- *       "account number" ("account number 41402612"), not as bank data of its own.
+ *       number. A national account number without its IBAN is masked as a reference after "account
+ *       number" ("account number 41402612"), not as bank data of its own.
  *   <li>Addresses with quoted or bracketed local parts, IP-address hosts or consecutive dots are
  *       not recognised; bare host names without a path are left by design.
  *   <li>An analyst's reference pattern is run as given: one that backtracks catastrophically can
@@ -359,7 +359,9 @@ public final class PiiMasker {
     boolean dot = false;
     boolean colon = false;
     boolean hyphen = false;
-    boolean upperPair = false;
+    boolean lettersThenDigit = false;
+    int upperRun = 0;
+    int upperRunEnd = -2;
     boolean lineBreak = false;
     boolean closer = false;
     int digits = 0;
@@ -382,8 +384,13 @@ public final class PiiMasker {
         lineBreak = true;
       } else if (c == ']' || c == ')' || c == '}') {
         closer = true;
-      } else if (c >= 'A' && c <= 'Z' && prev >= 'A' && prev <= 'Z') {
-        upperPair = true;
+      }
+      if (c >= 'A' && c <= 'Z') {
+        upperRun = prev >= 'A' && prev <= 'Z' ? upperRun + 1 : 1;
+        upperRunEnd = i;
+      } else if (c >= '0' && c <= '9' && upperRun >= 2) {
+        // two or more capitals right before the digit, or before a space and the digit ("QQ 12")
+        lettersThenDigit |= upperRunEnd == i - 1 || (upperRunEnd == i - 2 && prev == ' ');
       }
       if (PiiChars.isDigit(c)) {
         digit = true;
@@ -402,7 +409,8 @@ public final class PiiMasker {
     if (at) {
       PiiAddresses.handles(text, found);
     }
-    if (maySpellAnAddress(text, at, dot, closer, cues.has(PiiLexicon.SPELLED))) {
+    if (maySpellAnAddress(
+        text, at, dot, closer, cues.has(PiiLexicon.SPELLED), cues.has(PiiLexicon.AT))) {
       PiiAddresses.spelledEmails(text, found);
     }
     boolean scheme = slash && text.contains("://");
@@ -414,7 +422,7 @@ public final class PiiMasker {
       PiiNumbers.find(text, found);
       PiiBank.cardDetails(text, cues.has(PiiLexicon.CARD), found);
       PiiBank.ibans(text, found);
-      PiiIds.ids(text, cues.has(PiiLexicon.ID), hyphen, upperPair, longestDigitRun, found);
+      PiiIds.ids(text, cues.has(PiiLexicon.ID), hyphen, lettersThenDigit, longestDigitRun, found);
       if (cues.has(PiiLexicon.PLATE)) {
         PiiIds.plates(text, found);
       }
@@ -448,7 +456,7 @@ public final class PiiMasker {
    * "at" in brackets, or " at " with "dot" or a dot.
    */
   private static boolean maySpellAnAddress(
-      String text, boolean at, boolean dot, boolean closer, boolean spelledDot) {
+      String text, boolean at, boolean dot, boolean closer, boolean spelledDot, boolean spelledAt) {
     if (at) {
       return spelledDot;
     }
@@ -458,7 +466,7 @@ public final class PiiMasker {
             || PiiChars.containsIgnoreCase(text, "at}"))) {
       return true;
     }
-    return (spelledDot || dot) && PiiChars.containsIgnoreCase(text, " at ");
+    return (spelledDot || dot) && spelledAt && PiiChars.containsIgnoreCase(text, " at ");
   }
 
   /** The longest candidates first, ties to the more specific type; overlapping ones dropped. */

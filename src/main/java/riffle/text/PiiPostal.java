@@ -567,7 +567,7 @@ final class PiiPostal {
   }
 
   private static int extend(String text, int at, Pattern p) {
-    if (at >= text.length()) {
+    if (at >= text.length() || !startsTail(text.charAt(at))) {
       return at;
     }
     Matcher m = p.matcher(text);
@@ -576,9 +576,14 @@ final class PiiPostal {
     return m.lookingAt() ? m.end() : at;
   }
 
+  /** Every part after a street starts with a comma or a space. */
+  private static boolean startsTail(char c) {
+    return c == ',' || c == ' ' || c == '\u00a0';
+  }
+
   /** Like {@link #extend}, but the town's first word must not be a common word ("Great"). */
   private static int townAfter(String text, int at, Pattern p) {
-    if (at >= text.length()) {
+    if (at >= text.length() || !startsTail(text.charAt(at))) {
       return at;
     }
     Matcher m = p.matcher(text);
@@ -643,7 +648,14 @@ final class PiiPostal {
           }
           continue;
         }
-        if (i + 3 < n && text.charAt(i + 2) == ' ' || i + 4 < n && text.charAt(i + 3) == ' ') {
+        boolean code =
+            i + 3 < n
+                && text.charAt(i + 1) >= 'A'
+                && text.charAt(i + 1) <= 'Z'
+                && (text.charAt(i + 2) == ' ' || i + 4 < n && text.charAt(i + 3) == ' ')
+                && i >= 2
+                && text.charAt(i - 1) == ' ';
+        if (code) {
           region = region == null ? transparent(AFTER_REGION, text) : region;
           region.region(i, n);
           if (region.lookingAt()) {
