@@ -323,7 +323,7 @@ final class PiiPostal {
     boolean place = cues.has(PiiLexicon.PLACE);
     int[] placeEnds = place ? placeCueEnds(text) : new int[0];
     if (cues.has(PiiLexicon.STREET)) {
-      List<String> streets = new java.util.ArrayList<>();
+      java.util.Set<String> streets = new java.util.LinkedHashSet<>();
       for (int k = 0; k < cues.streetCount; k++) {
         int ws = cues.streets[k * 2];
         int we = cues.streets[k * 2 + 1];
@@ -343,7 +343,12 @@ final class PiiPostal {
 
   /** The address around one street word at {@code [ws, we)}, when there is one. */
   private static void street(
-      String text, int ws, int we, int[] placeEnds, List<PiiSpan> out, List<String> streets) {
+      String text,
+      int ws,
+      int we,
+      int[] placeEnds,
+      List<PiiSpan> out,
+      java.util.Set<String> streets) {
     String word = text.substring(ws, we).toLowerCase(Locale.ROOT);
     int n = text.length();
     boolean after = PiiLexicon.isStreet(PiiLexicon.StreetKind.AFTER, word);
