@@ -28,6 +28,7 @@ export function mount(section, context) {
   els.status = h('p', { class: 'status', id: 'board-status', 'aria-live': 'polite' });
   els.candidates = h('div', { id: 'board-candidates' });
   els.notice = h('p', { class: 'consent', id: 'board-consent', role: 'note' }, 'Quoting respondents publicly needs their consent under the local privacy law.');
+  els.takenOff = h('ul', { class: 'status', id: 'board-taken-off', role: 'status', hidden: true });
   els.slots = h('div', { id: 'board-slots' });
   els.boardError = h('div', { class: 'error', id: 'board-error', role: 'alert', hidden: true });
   const form = h(
@@ -63,6 +64,7 @@ export function mount(section, context) {
         { class: 'board-right', 'aria-labelledby': 'h-board-slots' },
         h('h2', { id: 'h-board-slots' }, 'The board'),
         els.notice,
+        els.takenOff,
         els.boardError,
         els.slots,
         exports,
@@ -212,6 +214,9 @@ async function loadBoard() {
 function drawBoard(b, focus) {
   board = b;
   els.notice.textContent = b.consent_notice;
+  const off = b.taken_off || [];
+  fill(els.takenOff, off.map((t) => h('li', {}, t)));
+  els.takenOff.hidden = off.length === 0;
   fill(
     els.slots,
     b.slots.map((s) =>

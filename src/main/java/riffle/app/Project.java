@@ -28,19 +28,47 @@ import riffle.text.TextAnalyzer;
 public final class Project implements AutoCloseable {
   private final ProjectStore store;
   private AnswerIndex index;
+  private List<String> notices = List.of();
 
   private Project(ProjectStore store) {
     this.store = store;
   }
 
-  /** Opens the project at {@code file}, creating an empty one when there is none. */
+  /**
+   * Opens the project at {@code file}, creating an empty one when there is none, and brings it up
+   * to date (see {@link #notices()}).
+   */
   public static Project openOrCreate(Path file) throws InputException {
-    return new Project(ProjectStore.openOrCreate(file));
+    return upToDate(new Project(ProjectStore.openOrCreate(file)));
   }
 
-  /** Opens an existing project, refusing a missing file. */
+  /** Opens an existing project, refusing a missing file, and brings it up to date. */
   public static Project openExisting(Path file) throws InputException {
-    return new Project(ProjectStore.openExisting(file));
+    return upToDate(new Project(ProjectStore.openExisting(file)));
+  }
+
+  /**
+   * Answers analysed by an older analysis version are analysed (and masked) again, so that an older
+   * project gains the new masks; then quotes on the copy board that masking now covers are taken
+   * off.
+   */
+  private static Project upToDate(Project p) throws InputException {
+    try {
+      Analyses.refresh(p.store, Progress.NONE);
+      p.notices = List.copyOf(p.quotes().recheckBoard());
+      return p;
+    } catch (InputException | RuntimeException e) {
+      p.close();
+      throw e;
+    }
+  }
+
+  /**
+   * What opening the project changed, one message each: quotes taken off the copy board because
+   * their answers are now masked where they were (also in the audit log and on the board).
+   */
+  public List<String> notices() {
+    return notices;
   }
 
   /**

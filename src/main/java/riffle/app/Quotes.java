@@ -91,8 +91,81 @@ public final class Quotes {
 
   // ---- the copy board ----
 
-  /** The copy board as stored. */
+  /** The audit action of a quote taken off the board because masking now covers part of it. */
+  static final String TAKEN_OFF = "unpin-masked";
+
+  /** Who takes such quotes off, in the audit log. */
+  static final String ACTOR = "riffle";
+
+  /** A person's board edits: the notices of quotes taken off are shown until the next of these. */
+  private static final Set<String> BOARD_EDITS =
+      Set.of("pin-quote", "unpin-quote", "move-quote", "working-line");
+
+  /**
+   * Takes off the board every quote that is no longer words of its answer's masked text (its answer
+   * was masked again, by a newer analysis, and a new mask covers part of the quote), with one
+   * audit-log row each; the rest of each slot keeps its order. Returns one message per quote taken
+   * off. A quote is never shown with personal data that masking now hides.
+   */
+  List<String> recheckBoard() throws InputException {
+    List<BoardRow> gone = new ArrayList<>();
+    List<Map<String, Object>> details = new ArrayList<>();
+    List<String> messages = new ArrayList<>();
+    for (ProjectStore.PinnedQuote p : store.pinnedQuotes()) {
+      BoardRow r = p.item();
+      if (p.masked().isEmpty() || p.masked().get().contains(r.text())) {
+        continue;
+      }
+      String message =
+          "Took quote "
+              + r.position()
+              + " of "
+              + BoardExport.heading(slotOf(r))
+              + " (answer "
+              + r.answerId()
+              + (r.code().isEmpty() ? "" : ", code \"" + r.code() + "\"")
+              + ") off the copy board: the answer is now masked where the quote was, because it"
+              + " held personal data. Pick another quote.";
+      gone.add(r);
+      messages.add(message);
+      Map<String, Object> d = new java.util.LinkedHashMap<>();
+      d.put("slot", r.slot());
+      d.put("answer_id", r.answerId());
+      d.put("code", r.code());
+      d.put("message", message);
+      details.add(d);
+    }
+    store.takeOffBoard(ACTOR, TAKEN_OFF, gone, details);
+    return messages;
+  }
+
+  /**
+   * The messages of the quotes taken off the board because masking now covers them, oldest first,
+   * since the last time a person changed the board.
+   */
+  public List<String> takenOff() throws InputException {
+    List<String> out = new ArrayList<>();
+    for (riffle.model.HistoryEntry e : store.history(500)) {
+      if (e.action().equals(TAKEN_OFF)) {
+        out.add(0, String.valueOf(e.detail().get("message")));
+      } else if (BOARD_EDITS.contains(e.action())) {
+        break;
+      }
+    }
+    return out;
+  }
+
+  private static QuoteSlot slotOf(BoardRow r) {
+    return QuoteSlot.valueOf(r.slot().toUpperCase(java.util.Locale.ROOT));
+  }
+
+  /**
+   * The copy board as stored, after {@link #recheckBoard}: a quote that is no longer its answer's
+   * masked words (an undo may bring back an item pinned before its answer was masked again) is
+   * taken off first.
+   */
   public CopyBoard board() throws InputException {
+    recheckBoard();
     List<BoardSlot> slots = new ArrayList<>();
     List<BoardRow> rows = store.board();
     for (QuoteSlot s : QuoteSlot.values()) {

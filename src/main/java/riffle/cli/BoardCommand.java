@@ -53,15 +53,25 @@ final class BoardCommand implements Callable<Integer> {
           spec.commandLine(), "Missing required option: '--project=P'");
     }
     CopyBoard board;
+    List<String> takenOff;
     try (Project p = Project.openExisting(project)) {
       board = p.quotes().board();
+      takenOff = p.quotes().takenOff();
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, board);
+      java.util.Map<String, Object> doc = new java.util.LinkedHashMap<>();
+      doc.put("title", board.title());
+      doc.put("slots", board.slots());
+      doc.put("taken_off", takenOff);
+      Json.print(out, doc);
       return 0;
     }
     out.println(CopyBoard.CONSENT_NOTICE);
+    for (String t : takenOff) {
+      out.println();
+      out.println(t);
+    }
     for (QuoteSlot slot : QuoteSlot.values()) {
       List<BoardItem> items = board.items(slot);
       out.printf(Locale.ROOT, "%n%s (%s)%n", heading(slot), slot.name().toLowerCase(Locale.ROOT));

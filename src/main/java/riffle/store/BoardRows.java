@@ -22,6 +22,51 @@ final class BoardRows {
     return query(c, SELECT + " ORDER BY b.slot, b.position, b.id", null);
   }
 
+  /** Every board item with its answer's masked text as now stored. */
+  static List<ProjectStore.PinnedQuote> withMasked(Connection c) throws SQLException {
+    List<BoardRow> rows = all(c);
+    java.util.Map<Long, String> masked = new java.util.HashMap<>();
+    try (PreparedStatement ps =
+        c.prepareStatement(
+            "SELECT b.id, a.masked FROM board_item b JOIN answer a ON a.id = b.answer_id")) {
+      try (ResultSet rs = ps.executeQuery()) {
+        while (rs.next()) {
+          masked.put(rs.getLong(1), rs.getString(2));
+        }
+      }
+    }
+    List<ProjectStore.PinnedQuote> out = new ArrayList<>(rows.size());
+    for (BoardRow r : rows) {
+      out.add(new ProjectStore.PinnedQuote(r, Optional.ofNullable(masked.get(r.id()))));
+    }
+    return out;
+  }
+
+  /** Deletes items and numbers the rest of their slots from 1 again, in their order. */
+  static void remove(Connection c, List<BoardRow> items) throws SQLException {
+    java.util.Set<String> slots = new java.util.TreeSet<>();
+    try (PreparedStatement ps = c.prepareStatement("DELETE FROM board_item WHERE id = ?")) {
+      for (BoardRow r : items) {
+        ps.setLong(1, r.id());
+        ps.addBatch();
+        slots.add(r.slot());
+      }
+      ps.executeBatch();
+    }
+    try (PreparedStatement ps =
+        c.prepareStatement("UPDATE board_item SET position = ? WHERE id = ?")) {
+      for (String slot : slots) {
+        List<BoardRow> left = slot(c, slot);
+        for (int i = 0; i < left.size(); i++) {
+          ps.setInt(1, i + 1);
+          ps.setLong(2, left.get(i).id());
+          ps.addBatch();
+        }
+      }
+      ps.executeBatch();
+    }
+  }
+
   static List<BoardRow> slot(Connection c, String slot) throws SQLException {
     return query(c, SELECT + " WHERE b.slot = ? ORDER BY b.position, b.id", slot);
   }

@@ -14,6 +14,7 @@ import java.util.Collection;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.Properties;
 import java.util.Set;
@@ -489,6 +490,48 @@ public final class ProjectStore implements AutoCloseable {
   /** Every item of the copy board, by slot and position. */
   public List<BoardRow> board() throws ProjectFileException {
     return read(BoardRows::all);
+  }
+
+  /**
+   * A pinned quote and its answer's masked text as now stored.
+   *
+   * @param item the board item
+   * @param masked the answer's masked text, empty while the answer is not analysed
+   */
+  public record PinnedQuote(BoardRow item, Optional<String> masked) {
+    public PinnedQuote {
+      Objects.requireNonNull(item, "item");
+      Objects.requireNonNull(masked, "masked");
+    }
+  }
+
+  /** Every item of the copy board with its answer's masked text. */
+  public List<PinnedQuote> pinnedQuotes() throws ProjectFileException {
+    return read(BoardRows::withMasked);
+  }
+
+  /**
+   * Takes items off the copy board outside the edit log, so that no undo puts them back, numbers
+   * the rest of their slots again, and writes one audit row per item ({@code action} by {@code
+   * actor}, with that item's {@code details}), all in one transaction.
+   */
+  public void takeOffBoard(
+      String actor, String action, List<BoardRow> items, List<Map<String, Object>> details)
+      throws ProjectFileException {
+    if (items.size() != details.size()) {
+      throw new IllegalArgumentException("one detail per item");
+    }
+    if (items.isEmpty()) {
+      return;
+    }
+    write(
+        c -> {
+          BoardRows.remove(c, items);
+          for (Map<String, Object> d : details) {
+            Audit.record(c, actor, action, d);
+          }
+          return null;
+        });
   }
 
   /** The codebook, in order. */

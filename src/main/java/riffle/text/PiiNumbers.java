@@ -45,6 +45,11 @@ final class PiiNumbers {
 
   private PiiNumbers() {}
 
+  /** Whether a lower-case word is a unit that makes the number before it a quantity. */
+  static boolean isUnitWord(String lower) {
+    return UNITS.contains(lower);
+  }
+
   /** Adds every phone and card number of {@code text} to {@code out}. */
   static void find(String text, List<PiiSpan> out) {
     int n = text.length();

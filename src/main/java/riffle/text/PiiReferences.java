@@ -21,7 +21,8 @@ final class PiiReferences {
               + "(?![\\p{L}\\p{N}])",
           // order 48213, order #48213, order number is 48213, tracking JD014600006281
           "(?i)(?<![\\p{L}\\p{N}])(?:order|invoice|receipt|rma|ticket|reference|ref|booking"
-              + "|confirmation|tracking|parcel|shipment|consignment|waybill)"
+              + "|confirmation|tracking|parcel|shipment|consignment|waybill|account|customer|member"
+              + "|membership|loyalty)"
               + "(?:\\s{1,3}(?:no\\.?|nr\\.?|num(?:ber)?|id|code|ref(?:erence)?))?"
               + "(?:\\s{0,3}[:#]|\\s{1,3}(?:is|was))?\\s{0,3}#?\\s{0,2}"
               + "(?<ref>(?=[A-Z-]{0,6}\\d{4})[A-Z\\d](?:[A-Z\\d]|-(?=[A-Z\\d])){3,39}+)"
@@ -91,6 +92,21 @@ final class PiiReferences {
       return false;
     } catch (PatternSyntaxException e) {
       return true;
+    }
+  }
+
+  /**
+   * Adds the matches of the default patterns ({@code refs} compiled from {@link #DEFAULTS}), each
+   * run only when the answer can hold one: the first two need a reference word or prefix ({@code
+   * cue}), the third eight digits ({@code eightDigits}).
+   */
+  static void findDefaults(
+      String text, List<Ref> refs, boolean cue, boolean eightDigits, List<PiiSpan> out) {
+    if (cue) {
+      find(text, refs.subList(0, 2), out);
+    }
+    if (eightDigits) {
+      find(text, refs.subList(2, 3), out);
     }
   }
 

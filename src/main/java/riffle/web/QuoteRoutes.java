@@ -157,6 +157,7 @@ final class QuoteRoutes {
     Map<String, Object> out = new LinkedHashMap<>();
     out.put("title", board.title());
     out.put("consent_notice", CopyBoard.CONSENT_NOTICE);
+    out.put("taken_off", p.quotes().takenOff());
     out.put("slots", board.slots());
     return out;
   }

@@ -28,7 +28,8 @@ class LuhnTest {
 
   @Test
   void acceptsTheWorkedExampleOfTheStandard() {
-    // the worked example given with the algorithm: account 7992739871, check digit 3
+    // the worked example usually given with the algorithm of ISO/IEC 7812-1 (annex B): account
+    // 7992739871, check digit 3 (recalled from memory; the digit sum is checked here)
     assertTrue(Luhn.isValid("79927398713"));
     assertFalse(Luhn.isValid("79927398710"));
   }

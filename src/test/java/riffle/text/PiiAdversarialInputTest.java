@@ -68,7 +68,29 @@ class PiiAdversarialInputTest {
             "%",
             "€1",
             "2026-03-15 ",
-            "9.30-")
+            "9.30-",
+            "12 Oak Road, ",
+            "Oak Road ",
+            "Via Roma 1",
+            "Hauptstraße 1 ",
+            ", London NW1 6XE",
+            "PO Box 1 ",
+            "Regards, Jo ",
+            "Thanks, Marta\n",
+            "Cheers,\n",
+            "name: jo ",
+            "DOB ",
+            "born on 1 May ",
+            "exp 12/28 ",
+            "cvv 123 ",
+            "GB82 WEST ",
+            "SSN 123-45-",
+            "QQ 12 34 ",
+            "192.168.",
+            "fe80::",
+            "02:1A:",
+            "reg AB12 ",
+            "10115 Berlin ")
         .map(unit -> Arguments.of(label(unit), unit.repeat(LENGTH / unit.length() + 1)));
   }
 

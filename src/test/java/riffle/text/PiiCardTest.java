@@ -23,8 +23,33 @@ class PiiCardTest {
   }
 
   @Test
-  void masksTheCardButNotTheSecurityCodeAfterIt() {
-    assertOne("4111 1111 1111 1111 123 was my card", PiiType.CARD, "4111 1111 1111 1111");
+  void masksTheExpiryAndSecurityCodeWrittenRightAfterTheCard() {
+    assertOne("4111 1111 1111 1111 123 was my card", PiiType.CARD, "4111 1111 1111 1111 123");
+    assertOne(
+        "card 4111 1111 1111 1111 exp 12/28 cvv 123 charged twice",
+        PiiType.CARD,
+        "4111 1111 1111 1111 exp 12/28 cvv 123");
+    assertOne(
+        "card 4012 8888 8888 1881, 09/27, 442 declined",
+        PiiType.CARD,
+        "4012 8888 8888 1881, 09/27, 442");
+    assertOne("paid 5555 5555 5555 4444 then waited", PiiType.CARD, "5555 5555 5555 4444");
+  }
+
+  @Test
+  void masksAnExpiryOrSecurityCodeAfterItsCueNearACard() {
+    assertOne("my visa card valid thru 03/2027 was refused", PiiType.CARD, "03/2027");
+    assertOne("credit card exp 08/26, is that why?", PiiType.CARD, "08/26");
+    assertOne("the CVV 731 kept failing", PiiType.CARD, "731");
+    assertOne("CVC: 0918", PiiType.CARD, "0918");
+    assertOne("my card's security code 0457 was refused", PiiType.CARD, "0457");
+  }
+
+  @Test
+  void leavesDatesAndCodesWithoutACardAlone() {
+    assertUntouched("the beans expire 12/26 according to the bag");
+    assertUntouched("the warranty is valid until 03/2028");
+    assertUntouched("the security code for the parcel locker was 4821");
   }
 
   @Test

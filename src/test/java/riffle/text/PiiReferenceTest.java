@@ -37,6 +37,9 @@ class PiiReferenceTest {
     assertOne("tracking JD014600006281 stuck", PiiType.REFERENCE, "JD014600006281");
     assertOne("tracking number: jd014600006281", PiiType.REFERENCE, "jd014600006281");
     assertOne("parcel # 4821-3377", PiiType.REFERENCE, "4821-3377");
+    // customer and account numbers are references to the shop's records, not phone numbers
+    assertOne("customer number 55501234 please", PiiType.REFERENCE, "55501234");
+    assertOne("account number 41402612 was charged", PiiType.REFERENCE, "41402612");
   }
 
   @Test

@@ -73,6 +73,14 @@ class BoardBrowserTest {
               .id();
       p.quotes().pin("setup", QuoteSlot.PROOF, hostile, WebServerTest.HOSTILE, "fast delivery");
     }
+    // a quote pinned while an older masker left an address in the answer: taken off on opening
+    try (java.sql.Connection c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + project);
+        java.sql.Statement s = c.createStatement()) {
+      s.executeUpdate(
+          "INSERT INTO board_item (id, slot, position, answer_id, code, text) SELECT 999,"
+              + " 'headline', 1, max(answer_id), 'fast delivery', 'sent to 14 Larkmead Road'"
+              + " FROM board_item");
+    }
     server = WebServer.start(project, WebServer.Options.defaults().webDir(Path.of("web")));
     profile = Chromium.profile();
     driver = Chromium.start(profile, "1280,1100");
@@ -138,6 +146,9 @@ class BoardBrowserTest {
     driver.findElement(By.id("board-coder-name")).sendKeys("Mia");
     driver.findElement(By.id("board-coder-go")).click();
     assertEquals(CopyBoard.CONSENT_NOTICE, text("#board-consent"), "the notice is on the board");
+    assertTrue(
+        text("#board-taken-off").startsWith("Took quote 1 of Headline ideas"),
+        "the page says which quote was taken off: " + text("#board-taken-off"));
 
     // the hostile answer pinned as proof shows as its characters, nothing runs
     waiting().until(d -> pinnedText("proof", 1).equals(WebServerTest.HOSTILE));

@@ -124,6 +124,7 @@ class QuoteApiTest {
     JsonNode second = candidates(findings, "headline").get(1);
     JsonNode objection = candidates(findings, "objection").get(0);
     assertEquals(CopyBoard.CONSENT_NOTICE, board().get("consent_notice").asText());
+    assertTrue(board().get("taken_off").isArray(), "quotes taken off because of new masks");
 
     WebServerTest.Answer pinned = post("/api/board/pin", pinOf("headline", headline));
     assertEquals(200, pinned.status(), pinned.raw().body());
