@@ -43,7 +43,8 @@ class ArchitectureTest {
                   "model", "ingest", "text", "stats", "index", "phrases", "coding", "report",
                   "quotes", "store", "csv")),
           Map.entry("web", Set.of("app", "model")),
-          // cli starts the web server for `serve` and `demo` (its one use of web: WebServer).
+          // cli starts the web server for `serve` and `demo` (WebServer) and shares its JSON style
+          // (Json).
           Map.entry("cli", Set.of("app", "model", "web")));
 
   /** Libraries the JDK-only packages may not touch. */

@@ -188,6 +188,16 @@ class WebServerTest {
     Answer limit = get("/api/search?q=delivery&limit=lots");
     assertEquals(400, limit.status());
     assertEquals("limit", limit.json().get("where").get("parameter").asText());
+    assertEquals("limit must be a whole number, not 'lots'", limit.json().get("error").asText());
+    Answer tooMany = get("/api/search?q=delivery&limit=100000");
+    assertEquals(400, tooMany.status());
+    assertTrue(
+        tooMany
+            .json()
+            .get("error")
+            .asText()
+            .matches("limit must be a whole number from 1 to \\d+, not '100000'"),
+        tooMany.json().toString());
   }
 
   @Test
