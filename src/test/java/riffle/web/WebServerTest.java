@@ -128,6 +128,13 @@ class WebServerTest {
     Answer api = get("/api/project");
     assertEquals("no-store", api.raw().headers().firstValue("Cache-Control").get());
     assertTrue(api.raw().headers().firstValue("Content-Security-Policy").isPresent());
+    assertTrue(page.raw().body().contains("<link rel=\"icon\" href=\"favicon.svg\""));
+    Answer icon = get("/favicon.svg");
+    assertEquals(200, icon.status());
+    assertTrue(
+        icon.raw().headers().firstValue("Content-Type").get().contains("image/svg+xml"),
+        "the favicon needs its image type under nosniff");
+    assertTrue(csp.contains("img-src 'self'"), "the page's own favicon is allowed: " + csp);
     Answer script = get("/js/dom.js");
     assertEquals(200, script.status());
     assertTrue(
