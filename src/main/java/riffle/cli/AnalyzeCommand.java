@@ -19,10 +19,9 @@ import riffle.model.Token;
 @Command(
     name = "analyze",
     mixinStandardHelpOptions = true,
-    description = {
-      "Shows what Riffle's text analysis makes of one answer: masked personal data, language,",
-      "sentences, tokens with Penn Treebank tags, stems and negation, and chunks."
-    })
+    description =
+        "Shows what Riffle's text analysis makes of one answer: masked personal data, "
+            + "language, sentences, tokens with Penn Treebank tags, stems and negation, and chunks.")
 final class AnalyzeCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 

@@ -16,10 +16,11 @@ import riffle.model.Span;
     name = "code",
     mixinStandardHelpOptions = true,
     description = {
-      "Gives a code to an answer (--add, optionally --span START:END of the words that carry it),",
-      "takes it off (--remove; rules will not give it back), accepts a suggestion (--accept), or",
-      "marks the answer as read with no (other) code applying (--none; --none-off takes the mark",
-      "off, and so does riffle undo). Findings count only answers a person has read."
+      "Gives a code to an answer (--add, optionally --span START:END of the words that "
+          + "carry it), takes it off (--remove; rules will not give it back), accepts a "
+          + "suggestion (--accept), or marks the answer as read with no (other) code applying "
+          + "(--none; --none-off takes the mark off, and so does riffle undo).",
+      "Findings count only answers a person has read."
     })
 final class CodeCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

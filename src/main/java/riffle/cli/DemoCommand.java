@@ -17,11 +17,10 @@ import riffle.app.ImportReport;
 @Command(
     name = "demo",
     mixinStandardHelpOptions = true,
-    description = {
-      "Builds the demo project from the bundled sample waves (an invented shop's buyer survey)",
-      "in a working folder outside the repository, reusing it on later runs, then serves it to",
-      "your browser until interrupted (leave that out with --no-serve)."
-    })
+    description =
+        "Builds the demo project from the bundled sample waves (an invented shop's buyer "
+            + "survey) in a working folder outside the repository, reusing it on later runs, then "
+            + "serves it to your browser until interrupted (leave that out with --no-serve).")
 final class DemoCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 

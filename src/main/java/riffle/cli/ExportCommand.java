@@ -19,9 +19,10 @@ import riffle.model.InputException;
     name = "export",
     mixinStandardHelpOptions = true,
     description = {
-      "Writes a file: the coded answers (csv: one row per answer with a 0/1 column per code, or",
-      "--long: one row per code given), the codebook (csv, json, md), the findings (html, md,",
-      "json) or the copy board of quotes (md, txt, csv, json). Answers are always masked."
+      "Writes a file: the coded answers (csv: one row per answer with a 0/1 column per "
+          + "code, or --long: one row per code given), the codebook (csv, json, md), the findings "
+          + "(html, md, json) or the copy board of quotes (md, txt, csv, json).",
+      "Answers are always masked."
     })
 final class ExportCommand implements Callable<Integer> {
   enum What {

@@ -28,9 +28,10 @@ import riffle.model.InputProblem;
     name = "import",
     mixinStandardHelpOptions = true,
     description = {
-      "Brings a survey export (CSV/TSV file, or cells pasted on standard input) in as a wave.",
-      "Encoding, delimiter and column roles are detected unless named. Importing the same rows",
-      "into the same wave again adds nothing. An unusable file changes nothing and exits 2."
+      "Brings a survey export (CSV/TSV file, or cells pasted on standard input) in as a " + "wave.",
+      "Encoding, delimiter and column roles are detected unless named. Importing the same "
+          + "rows into the same wave again adds nothing. An unusable file changes nothing and "
+          + "exits 2."
     })
 final class ImportCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

@@ -25,11 +25,11 @@ import riffle.model.WaveChange;
 @Command(
     name = "phrases",
     mixinStandardHelpOptions = true,
-    description = {
-      "Shows the recurring phrases of the answers in the buyers' own words (negation kept),",
-      "the themes that travel together as candidate codes with a ready search query, and, with",
-      "--against, the phrases that rose or fell between two waves (log-likelihood, Log Ratio)."
-    })
+    description =
+        "Shows the recurring phrases of the answers in the buyers' own words (negation kept), "
+            + "the themes that travel together as candidate codes with a ready search query, and, "
+            + "with --against, the phrases that rose or fell between two waves (log-likelihood, Log "
+            + "Ratio).")
 final class PhrasesCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 

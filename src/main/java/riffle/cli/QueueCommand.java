@@ -26,9 +26,10 @@ import riffle.model.ReviewQueue;
     name = "queue",
     mixinStandardHelpOptions = true,
     description = {
-      "Lists the random review queues. A queue puts the answers of one wave and question (or of",
-      "one segment value) in a seeded random order; the answers read from its start are a random",
-      "sample, so the findings can project a share to every answer of the wave."
+      "Lists the random review queues.",
+      "A queue puts the answers of one wave and question (or of one segment value) in a "
+          + "seeded random order; the answers read from its start are a random sample, so the "
+          + "findings can project a share to every answer of the wave."
     },
     subcommands = {QueueCommand.Start.class, QueueCommand.Next.class})
 final class QueueCommand implements Callable<Integer> {
@@ -161,10 +162,9 @@ final class QueueCommand implements Callable<Integer> {
   @Command(
       name = "next",
       mixinStandardHelpOptions = true,
-      description = {
-        "Shows the next answers to read in the queue's random order (masked), with their ids to",
-        "code them by (riffle code --answer ID --add CODE)."
-      })
+      description =
+          "Shows the next answers to read in the queue's random order (masked), with their ids "
+              + "to code them by (riffle code --answer ID --add CODE).")
   static final class Next implements Callable<Integer> {
     @Spec CommandSpec spec;
     @Mixin Which which;

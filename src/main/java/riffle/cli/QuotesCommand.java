@@ -25,9 +25,10 @@ import riffle.model.QuoteSlot;
     name = "quotes",
     mixinStandardHelpOptions = true,
     description = {
-      "Shows quotable buyer wording: per use (headline ideas, sub-headline ideas, benefit lines,",
-      "objections to answer, proof quotes) the best candidates from the coded answers, masked,",
-      "each traceable to its answer. Quoting respondents publicly needs their consent."
+      "Shows quotable buyer wording: per use (headline ideas, sub-headline ideas, benefit "
+          + "lines, objections to answer, proof quotes) the best candidates from the coded "
+          + "answers, masked, each traceable to its answer.",
+      "Quoting respondents publicly needs their consent."
     })
 final class QuotesCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

@@ -32,9 +32,10 @@ import riffle.model.WaveChange;
     name = "report",
     mixinStandardHelpOptions = true,
     description = {
-      "Shows the findings: what rose or fell between waves (and whether the change is real),",
-      "each theme's share with its 95% interval, themes that come together, and whether coding",
-      "has found the themes there are. --html and --markdown write the full report."
+      "Shows the findings: what rose or fell between waves (and whether the change is "
+          + "real), each theme's share with its 95%% interval, themes that come together, and "
+          + "whether coding has found the themes there are.",
+      "--html and --markdown write the full report."
     })
 final class ReportCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

@@ -27,9 +27,10 @@ import riffle.model.SearchHit;
     name = "rules",
     mixinStandardHelpOptions = true,
     description = {
-      "Lists the saved rules. A rule is a search query owned by a code; applying it codes every",
-      "matching answer, except those from which a person took the code off. Rules run again on",
-      "every new wave."
+      "Lists the saved rules.",
+      "A rule is a search query owned by a code; applying it codes every matching answer, "
+          + "except those from which a person took the code off. Rules run again on every new "
+          + "wave."
     },
     subcommands = {
       RulesCommand.Add.class,

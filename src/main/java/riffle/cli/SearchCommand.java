@@ -21,9 +21,10 @@ import riffle.model.SearchResult;
     name = "search",
     mixinStandardHelpOptions = true,
     description = {
-      "Finds answers: words (stemmed), \"exact phrases\", \"near words\"~3, prefix*, AND, OR,",
-      "NOT, parentheses, and filters wave:, question:N, code:, is:uncoded and any segment",
-      "column (device:mobile). Shows the masked answers with the matched words marked."
+      "Finds answers: words (stemmed), \"exact phrases\", \"near words\"~3, prefix*, AND, "
+          + "OR, NOT, parentheses, and filters wave:, question:N, code:, is:uncoded and any "
+          + "segment column (device:mobile).",
+      "Shows the masked answers with the matched words marked."
     })
 final class SearchCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

@@ -14,9 +14,10 @@ import riffle.web.WebServer;
     name = "serve",
     mixinStandardHelpOptions = true,
     description = {
-      "Serves the project to your browser: bring in waves, search the answers, see the",
-      "recurring phrases. Listens on 127.0.0.1 unless told otherwise; any other address needs",
-      "the access token printed at start. Runs until interrupted (Ctrl+C)."
+      "Serves the project to your browser: bring in waves, search the answers, see the "
+          + "recurring phrases.",
+      "Listens on 127.0.0.1 unless told otherwise; any other address needs the access token "
+          + "printed at start. Runs until interrupted (Ctrl+C)."
     })
 final class ServeCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

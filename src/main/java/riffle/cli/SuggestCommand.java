@@ -21,9 +21,10 @@ import riffle.model.SuggestionReport;
     name = "suggest",
     mixinStandardHelpOptions = true,
     description = {
-      "Learns from the answers people coded (by hand or imported) and shows the codes it would",
-      "suggest, with how often such suggestions were right (cross-validated precision, recall,",
-      "F1 and support per code). Nothing is coded unless you say --accept-above."
+      "Learns from the answers people coded (by hand or imported) and shows the codes it "
+          + "would suggest, with how often such suggestions were right (cross-validated "
+          + "precision, recall, F1 and support per code).",
+      "Nothing is coded unless you say --accept-above."
     })
 final class SuggestCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

@@ -12,8 +12,9 @@ import riffle.model.InputException;
     name = "undo",
     mixinStandardHelpOptions = true,
     description = {
-      "Takes back your newest change still in effect (codes given or taken off, codebook changes,",
-      "rules). Another coder's later change to the same row is left alone."
+      "Takes back your newest change still in effect (codes given or taken off, codebook "
+          + "changes, rules).",
+      "Another coder's later change to the same row is left alone."
     })
 final class UndoCommand implements Callable<Integer> {
   @Spec CommandSpec spec;

@@ -23,6 +23,7 @@ import java.util.Set;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
+import riffle.csv.SafeCsv;
 import riffle.model.Code;
 import riffle.model.CodeDraft;
 import riffle.model.Direction;
@@ -150,7 +151,7 @@ public final class CodebookFile {
         Map<String, String> cells = new HashMap<>();
         for (Map.Entry<String, Integer> h : header.entrySet()) {
           if (h.getValue() < r.size()) {
-            cells.put(h.getKey(), r.get(h.getValue()));
+            cells.put(h.getKey(), SafeCsv.restore(r.get(h.getValue())));
           }
         }
         rows.add(row(source, line, cells, header));
@@ -268,10 +269,9 @@ public final class CodebookFile {
   /** The codebook as CSV (RFC 4180), cells a spreadsheet would run as formulas neutralised. */
   public static String csv(List<Code> book) {
     Map<Long, String> names = names(book);
-    StringBuilder out = new StringBuilder();
-    SafeCells.line(out, COLUMNS);
+    SafeCsv out = SafeCsv.create(false).row(COLUMNS);
     for (Code c : book) {
-      SafeCells.line(out, values(c, names));
+      out.row(values(c, names));
     }
     return out.toString();
   }

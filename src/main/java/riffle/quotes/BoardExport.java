@@ -3,6 +3,7 @@ package riffle.quotes;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import riffle.csv.SafeCsv;
 import riffle.model.BoardItem;
 import riffle.model.BoardSlot;
 import riffle.model.CopyBoard;
@@ -96,26 +97,21 @@ public final class BoardExport {
   }
 
   /**
-   * The board as CSV (RFC 4180: comma-separated, CRLF line ends, a cell quoted when it holds a
-   * comma, quote or line break, quotes doubled). The first record is the notice, padded with empty
-   * cells to the column count; the second names the columns ({@link #CSV_COLUMNS}); then one record
-   * per item, slot by slot in order. Cells that begin with {@code = + - @}, a tab or a carriage
-   * return get a leading single quote so that spreadsheets show them as text (OWASP, "CSV
-   * Injection").
+   * The board as CSV, written by {@link SafeCsv} (RFC 4180, cells a spreadsheet would run as
+   * formulas neutralised). The first record is the notice, padded with empty cells to the column
+   * count; the second names the columns ({@link #CSV_COLUMNS}); then one record per item, slot by
+   * slot in order.
    */
   public static String csv(CopyBoard board) {
     Objects.requireNonNull(board, "board");
-    StringBuilder out = new StringBuilder();
     String[] notice = new String[CSV_COLUMNS.size()];
     java.util.Arrays.fill(notice, "");
     notice[0] = CopyBoard.CONSENT_NOTICE;
-    row(out, List.of(notice));
-    row(out, CSV_COLUMNS);
+    SafeCsv out = SafeCsv.create(false).row(List.of(notice)).row(CSV_COLUMNS);
     for (BoardSlot slot : board.slots()) {
       int n = 1;
       for (BoardItem item : slot.items()) {
-        row(
-            out,
+        out.row(
             List.of(
                 slot.slot().name().toLowerCase(Locale.ROOT),
                 Integer.toString(n++),
@@ -162,26 +158,5 @@ public final class BoardExport {
       out.append(c);
     }
     return out.toString();
-  }
-
-  private static void row(StringBuilder out, List<String> cells) {
-    for (int i = 0; i < cells.size(); i++) {
-      if (i > 0) {
-        out.append(',');
-      }
-      out.append(cell(cells.get(i)));
-    }
-    out.append("\r\n");
-  }
-
-  /** One CSV cell: neutralised (OWASP), then quoted where RFC 4180 needs it. */
-  static String cell(String value) {
-    String v = value;
-    if (!v.isEmpty() && "=+-@\t\r".indexOf(v.charAt(0)) >= 0) {
-      v = "'" + v;
-    }
-    boolean quote =
-        v.indexOf(',') >= 0 || v.indexOf('"') >= 0 || v.indexOf('\n') >= 0 || v.indexOf('\r') >= 0;
-    return quote ? '"' + v.replace("\"", "\"\"") + '"' : v;
   }
 }

@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.OptionalLong;
 import java.util.Set;
 import java.util.TreeSet;
+import riffle.csv.SafeCsv;
 
 /** The coded-answers exports (wide and long) and the codebook as CSV and Markdown. */
 final class CodedCsv {
@@ -27,7 +28,7 @@ final class CodedCsv {
     header.addAll(metaKeys);
     header.add("text");
     header.addAll(codeHeaders(codebook));
-    Csv csv = new Csv(withBom).row(header);
+    SafeCsv csv = SafeCsv.create(withBom).row(header);
     long[] bits = new long[codebook.words];
     for (ExportAnswer a : export.answers()) {
       List<String> row = new ArrayList<>(header.size());
@@ -81,8 +82,8 @@ final class CodedCsv {
     for (ReportCode c : export.codebook()) {
       codes.put(c.id(), c);
     }
-    Csv csv =
-        new Csv(withBom)
+    SafeCsv csv =
+        SafeCsv.create(withBom)
             .row(
                 List.of(
                     "answer_id",

@@ -301,7 +301,7 @@ final class CodingRoutes {
           case "no" -> Optional.of(false);
           default -> throw ApiError.badParameter("coded", "coded is yes or no");
         };
-    int question = intParam(ctx, "question", 0, 0, 10_000);
+    int question = QueryParams.wholeNumber(ctx, "question", 0, 0, 10_000);
     long code = longParam(ctx, "code", 0);
     AnswerQuery query =
         new AnswerQuery(
@@ -311,8 +311,8 @@ final class CodingRoutes {
             coded,
             code == 0 ? OptionalLong.empty() : OptionalLong.of(code),
             Optional.ofNullable(ctx.queryParam("q")).orElse(""),
-            intParam(ctx, "offset", 0, 0, Integer.MAX_VALUE),
-            intParam(ctx, "limit", 50, 1, AnswerQuery.MAX_LIMIT));
+            QueryParams.wholeNumber(ctx, "offset", 0, 0, Integer.MAX_VALUE),
+            QueryParams.wholeNumber(ctx, "limit", 50, 1, AnswerQuery.MAX_LIMIT));
     ctx.json(
         access.call(
             p -> {
@@ -430,7 +430,7 @@ final class CodingRoutes {
   }
 
   void history(Context ctx) throws Exception {
-    int limit = intParam(ctx, "limit", 50, 1, 1_000);
+    int limit = QueryParams.wholeNumber(ctx, "limit", 50, 1, 1_000);
     ctx.json(access.call(p -> Map.of("history", p.coding().history(limit))));
   }
 
@@ -645,22 +645,5 @@ final class CodingRoutes {
     } catch (NumberFormatException e) {
       throw ApiError.badParameter(name, name + " must be an id (a number), not '" + v + "'");
     }
-  }
-
-  static int intParam(Context ctx, String name, int fallback, int min, int max) {
-    String v = ctx.queryParam(name);
-    if (v == null || v.isBlank()) {
-      return fallback;
-    }
-    try {
-      int n = Integer.parseInt(v.strip());
-      if (n >= min && n <= max) {
-        return n;
-      }
-    } catch (NumberFormatException e) {
-      // answered below
-    }
-    throw ApiError.badParameter(
-        name, name + " must be a whole number from " + min + " to " + max + ", not '" + v + "'");
   }
 }

@@ -2,7 +2,10 @@ package riffle.web;
 
 import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
+import io.javalin.validation.ValidationError;
+import io.javalin.validation.ValidationException;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import org.slf4j.Logger;
@@ -48,6 +51,9 @@ final class Errors {
       }
       return new Failure(input.located().isPresent() ? 400 : 422, body(message, where));
     }
+    if (e instanceof ValidationException v) {
+      return validation(v);
+    }
     if (e instanceof HttpResponseException h) {
       return new Failure(h.getStatus(), body(forStatus(h.getStatus()), Map.of()));
     }
@@ -92,6 +98,26 @@ final class Errors {
                   + " report it if it happens again."
               : "the request cannot be served (HTTP " + status + ")";
     };
+  }
+
+  /**
+   * A query parameter refused by Javalin's validator: 400 naming the parameter; the message is the
+   * rule the route checked, or that the value is not a whole number, with the value sent.
+   */
+  private static Failure validation(ValidationException v) {
+    for (Map.Entry<String, List<ValidationError<Object>>> entry : v.getErrors().entrySet()) {
+      if (entry.getValue().isEmpty()) {
+        continue;
+      }
+      ValidationError<Object> error = entry.getValue().get(0);
+      String rule =
+          "TYPE_CONVERSION_FAILED".equals(error.getMessage())
+              ? entry.getKey() + " must be a whole number"
+              : error.getMessage();
+      return new Failure(
+          400, body(rule + ", not '" + error.value + "'", Map.of("parameter", entry.getKey())));
+    }
+    return new Failure(400, body("the request is not valid", Map.of()));
   }
 
   /** Answers a request with the failure. */

@@ -25,16 +25,30 @@ import java.util.Map;
 import java.util.stream.Collectors;
 
 /**
- * The API's JSON: snake_case keys, ISO dates, lower-case enum values (read in any case), absent
- * optional values as null; request bodies with unknown fields are refused.
+ * The API's JSON: Riffle's one JSON style ({@link #style}), enum values read in any case; request
+ * bodies with unknown fields are refused.
  */
-final class Json {
+public final class Json {
   static final ObjectMapper MAPPER = mapper();
 
   private Json() {}
 
-  @SuppressWarnings({"rawtypes", "unchecked"})
   private static ObjectMapper mapper() {
+    return style()
+        .enable(MapperFeature.ACCEPT_CASE_INSENSITIVE_ENUMS)
+        .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+        .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
+        .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+        .build();
+  }
+
+  /**
+   * Riffle's one JSON style, shared by the API and the command line: snake_case keys, ISO dates,
+   * lower-case enum values, an absent optional value as null. The API adds its strict reading; the
+   * command line its indentation.
+   */
+  @SuppressWarnings({"rawtypes", "unchecked"})
+  public static JsonMapper.Builder style() {
     SimpleModule enums = new SimpleModule("riffle-enums");
     enums.addSerializer(
         Enum.class,
@@ -50,12 +64,7 @@ final class Json {
         .addModule(new Jdk8Module())
         .addModule(enums)
         .propertyNamingStrategy(PropertyNamingStrategies.SNAKE_CASE)
-        .enable(MapperFeature.ACCEPT_CASE_INSENSITIVE_ENUMS)
-        .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-        .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
-        .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-        .disable(SerializationFeature.WRITE_DATES_AS_TIMESTAMPS)
-        .build();
+        .disable(SerializationFeature.WRITE_DATES_AS_TIMESTAMPS);
   }
 
   /**

@@ -68,8 +68,8 @@ final class QueueRoutes {
     OptionalInt offset =
         given == null || given.isBlank()
             ? OptionalInt.empty()
-            : OptionalInt.of(CodingRoutes.intParam(ctx, "offset", 0, 0, Integer.MAX_VALUE));
-    int limit = CodingRoutes.intParam(ctx, "limit", 50, 1, AnswerQuery.MAX_LIMIT);
+            : OptionalInt.of(QueryParams.wholeNumber(ctx, "offset", 0, 0, Integer.MAX_VALUE));
+    int limit = QueryParams.wholeNumber(ctx, "limit", 50, 1, AnswerQuery.MAX_LIMIT);
     QueuePage page =
         access.call(p -> p.queues().page(key, offset, limit)).orElseThrow(() -> notStarted(key));
     List<Map<String, Object>> answers = new ArrayList<>();

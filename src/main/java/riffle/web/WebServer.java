@@ -6,6 +6,7 @@ import io.javalin.http.Context;
 import io.javalin.http.HttpResponseException;
 import io.javalin.http.staticfiles.Location;
 import io.javalin.json.JavalinJackson;
+import io.javalin.validation.ValidationException;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.net.URI;
@@ -219,6 +220,7 @@ public final class WebServer implements AutoCloseable {
     coding.register(cfg);
     quotes.register(cfg);
     cfg.routes.exception(Exception.class, Errors::answer);
+    cfg.routes.exception(ValidationException.class, Errors::answer);
     cfg.routes.exception(HttpResponseException.class, WebServer::refused);
     cfg.routes.error(
         404,
@@ -354,7 +356,7 @@ public final class WebServer implements AutoCloseable {
       if (q == null || q.isBlank()) {
         throw ApiError.badParameter("q", "write a query, such as delivery or \"delivery date\"");
       }
-      int limit = intParam(ctx, "limit", 50, 1, MAX_HITS);
+      int limit = QueryParams.wholeNumber(ctx, "limit", 50, 1, MAX_HITS);
       ctx.json(access.call(p -> p.search(q, limit)).shortened(ShownText.MAX_CHARS));
     }
 
@@ -366,7 +368,7 @@ public final class WebServer implements AutoCloseable {
         throw new ApiError(
             400, "the answer id must be a number, not '" + ctx.pathParam("id") + "'");
       }
-      int limit = intParam(ctx, "limit", 20, 1, MAX_HITS);
+      int limit = QueryParams.wholeNumber(ctx, "limit", 20, 1, MAX_HITS);
       ctx.json(
           access.call(
               p -> {
@@ -396,7 +398,7 @@ public final class WebServer implements AutoCloseable {
                 text(ctx, "question"),
                 segments,
                 text(ctx, "against"),
-                intParam(ctx, "limit", 30, 1, 500));
+                QueryParams.wholeNumber(ctx, "limit", 30, 1, 500));
       } catch (IllegalArgumentException e) {
         throw ApiError.badParameter("against", e.getMessage().replace("--", ""));
       }
@@ -405,23 +407,6 @@ public final class WebServer implements AutoCloseable {
 
     private static Optional<String> text(Context ctx, String name) {
       return Optional.ofNullable(ctx.queryParam(name)).map(String::strip).filter(s -> !s.isEmpty());
-    }
-
-    private static int intParam(Context ctx, String name, int fallback, int min, int max) {
-      String v = ctx.queryParam(name);
-      if (v == null || v.isBlank()) {
-        return fallback;
-      }
-      try {
-        int n = Integer.parseInt(v.strip());
-        if (n >= min && n <= max) {
-          return n;
-        }
-      } catch (NumberFormatException e) {
-        // answered below
-      }
-      throw ApiError.badParameter(
-          name, name + " must be a whole number from " + min + " to " + max + ", not '" + v + "'");
     }
   }
 }

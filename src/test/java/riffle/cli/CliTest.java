@@ -318,6 +318,35 @@ class CliTest {
   }
 
   @Test
+  void helpFormatsEveryDescriptionWithoutWarnings() {
+    java.io.PrintStream realErr = System.err;
+    ByteArrayOutputStream traced = new ByteArrayOutputStream();
+    System.setErr(new java.io.PrintStream(traced, true, StandardCharsets.UTF_8));
+    Run report;
+    try {
+      for (String command :
+          List.of(
+              "import", "info", "analyze", "search", "phrases", "codes", "code", "undo", "redo",
+              "rules", "queue", "history", "suggest", "report", "quotes", "board", "export",
+              "serve", "demo")) {
+        Run run = riffle(command, "--help");
+        assertEquals(0, run.code(), command);
+        assertTrue(!run.err().contains("WARN"), command + ": " + run.err());
+      }
+      report = riffle("report", "--help");
+    } finally {
+      System.setErr(realErr);
+    }
+    String warnings = traced.toString(StandardCharsets.UTF_8);
+    assertTrue(!warnings.contains("Could not format"), warnings);
+    assertTrue(report.out().contains("95% interval"), report.out());
+    Run root = riffle("--help");
+    assertTrue(
+        root.out().lines().anyMatch(l -> l.strip().startsWith("report") && l.contains("Shows")),
+        root.out());
+  }
+
+  @Test
   void analyzePrintsTheFixedJsonKeys() throws IOException {
     Run run =
         riffle("analyze", "--text", "Did NOT arrive on time. Call 07700 900123 please", "--json");

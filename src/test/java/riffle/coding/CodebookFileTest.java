@@ -11,6 +11,7 @@ import java.util.OptionalLong;
 import org.junit.jupiter.api.Test;
 import riffle.coding.CodebookFile.Format;
 import riffle.coding.CodebookFile.Row;
+import riffle.csv.SafeCsv;
 import riffle.model.Code;
 import riffle.model.Direction;
 import riffle.model.InputException;
@@ -62,9 +63,26 @@ class CodebookFileTest {
   void formulaLikeCellsAreNeutralised() {
     String csv = CodebookFile.csv(List.of(code(1, "@cost", OptionalLong.empty(), null)));
     assertTrue(csv.contains("\r\n'@cost,"), csv);
-    assertEquals("'-1", SafeCells.neutral("-1"));
-    assertEquals("'\tx", SafeCells.neutral("\tx"));
-    assertEquals("plain", SafeCells.neutral("plain"));
+    assertEquals("'-1", SafeCsv.neutralise("-1"));
+    assertEquals("'\tx", SafeCsv.neutralise("\tx"));
+    assertEquals("plain", SafeCsv.neutralise("plain"));
+  }
+
+  @Test
+  void formulaLikeNamesComeBackAsWrittenFromTheCsvFile() throws Exception {
+    List<String> names =
+        List.of("=HYPERLINK(\"http://x\")", "+1", "-5 stars", "@cost", "'=quoted", "'plain");
+    List<Code> book = new java.util.ArrayList<>();
+    for (int i = 0; i < names.size(); i++) {
+      book.add(code(i + 1, names.get(i), OptionalLong.empty(), null));
+    }
+    String csv = CodebookFile.csv(book);
+    assertTrue(csv.contains("\r\n\"'=HYPERLINK(\"\"http://x\"\")\","), csv);
+    List<Row> rows = read(csv, Format.CSV);
+    assertEquals(names.size(), rows.size());
+    for (int i = 0; i < names.size(); i++) {
+      assertEquals(Optional.of(names.get(i)), rows.get(i).draft().name(), csv);
+    }
   }
 
   @Test

@@ -12,6 +12,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
+import riffle.csv.SafeCsv;
 import riffle.model.BoardItem;
 import riffle.model.CopyBoard;
 import riffle.model.QuoteSlot;
@@ -94,12 +95,12 @@ class BoardExportTest {
 
   @Test
   void cellsAreQuotedOnlyWhenNeeded() {
-    assertEquals("plain", BoardExport.cell("plain"));
-    assertEquals("\"a,b\"", BoardExport.cell("a,b"));
-    assertEquals("\"say \"\"hi\"\"\"", BoardExport.cell("say \"hi\""));
-    assertEquals("'+1", BoardExport.cell("+1"));
-    assertEquals("'\tx", BoardExport.cell("\tx"));
-    assertEquals("\"'\rx\"", BoardExport.cell("\rx"));
-    assertEquals("", BoardExport.cell(""));
+    assertEquals("plain", SafeCsv.cell("plain"));
+    assertEquals("\"a,b\"", SafeCsv.cell("a,b"));
+    assertEquals("\"say \"\"hi\"\"\"", SafeCsv.cell("say \"hi\""));
+    assertEquals("'+1", SafeCsv.cell("+1"));
+    assertEquals("'\tx", SafeCsv.cell("\tx"));
+    assertEquals("\"'\rx\"", SafeCsv.cell("\rx"));
+    assertEquals("", SafeCsv.cell(""));
   }
 }

@@ -15,6 +15,7 @@ import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import riffle.csv.SafeCsv;
 import riffle.model.Findings;
 
 class ExportsTest {
@@ -127,15 +128,15 @@ class ExportsTest {
   void csvCellsThatLookLikeFormulasAreNeutralised() {
     for (String risky : List.of("=HYPERLINK(\"x\")", "+1", "-5 stars", "@cmd", "\tx", "\rx")) {
       String csv = Exports.codedAnswersCsv(export(risky), false);
-      String cell = Csv.cell(risky);
+      String cell = SafeCsv.cell(risky);
       assertTrue(cell.startsWith("'") || cell.startsWith("\"'"), risky + " → " + cell);
       assertTrue(csv.contains(cell), csv);
     }
     String csv = Exports.codedAnswersCsv(export("fine, \"quoted\"\nline"), false);
     assertTrue(csv.contains("\"fine, \"\"quoted\"\"\nline\""));
     assertTrue(csv.contains("'@SUM(A1)"), "metadata is neutralised too");
-    assertEquals("plain", Csv.cell("plain"));
-    assertEquals("", Csv.cell(""));
+    assertEquals("plain", SafeCsv.cell("plain"));
+    assertEquals("", SafeCsv.cell(""));
   }
 
   @Test

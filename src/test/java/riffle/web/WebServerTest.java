@@ -128,6 +128,13 @@ class WebServerTest {
     Answer api = get("/api/project");
     assertEquals("no-store", api.raw().headers().firstValue("Cache-Control").get());
     assertTrue(api.raw().headers().firstValue("Content-Security-Policy").isPresent());
+    assertTrue(page.raw().body().contains("<link rel=\"icon\" href=\"favicon.svg\""));
+    Answer icon = get("/favicon.svg");
+    assertEquals(200, icon.status());
+    assertTrue(
+        icon.raw().headers().firstValue("Content-Type").get().contains("image/svg+xml"),
+        "the favicon needs its image type under nosniff");
+    assertTrue(csp.contains("img-src 'self'"), "the page's own favicon is allowed: " + csp);
     Answer script = get("/js/dom.js");
     assertEquals(200, script.status());
     assertTrue(
@@ -188,6 +195,16 @@ class WebServerTest {
     Answer limit = get("/api/search?q=delivery&limit=lots");
     assertEquals(400, limit.status());
     assertEquals("limit", limit.json().get("where").get("parameter").asText());
+    assertEquals("limit must be a whole number, not 'lots'", limit.json().get("error").asText());
+    Answer tooMany = get("/api/search?q=delivery&limit=100000");
+    assertEquals(400, tooMany.status());
+    assertTrue(
+        tooMany
+            .json()
+            .get("error")
+            .asText()
+            .matches("limit must be a whole number from 1 to \\d+, not '100000'"),
+        tooMany.json().toString());
   }
 
   @Test
