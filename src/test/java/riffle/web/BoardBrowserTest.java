@@ -10,7 +10,6 @@ import java.net.http.HttpRequest;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.time.Duration;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalInt;
@@ -96,8 +95,7 @@ class BoardBrowserTest {
   }
 
   static WebDriverWait waiting() {
-    return (WebDriverWait)
-        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+    return Chromium.waiting(driver);
   }
 
   static Object js(String script, Object... args) {

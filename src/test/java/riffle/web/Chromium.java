@@ -4,11 +4,15 @@ import java.io.File;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.Comparator;
 import java.util.stream.Stream;
+import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.WebDriver;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
+import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * Debian's Chromium, headless, with its own fresh profile, for the browser tests (the settings in
@@ -46,7 +50,7 @@ final class Chromium {
   }
 
   /** Quits the browser (when started) and deletes its profile (when made). */
-  static void stop(org.openqa.selenium.WebDriver driver, Path profile) throws IOException {
+  static void stop(WebDriver driver, Path profile) throws IOException {
     if (driver != null) {
       driver.quit();
     }
@@ -55,5 +59,21 @@ final class Chromium {
         files.sorted(Comparator.reverseOrder()).map(Path::toFile).forEach(File::delete);
       }
     }
+  }
+
+  /** A wait of up to a minute that polls every 50 ms (the default 500 ms slows every step). */
+  static WebDriverWait waiting(WebDriver driver) {
+    return (WebDriverWait)
+        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+  }
+
+  /** The text of the first element matching {@code css}, or "" when there is none. */
+  static String text(WebDriver driver, String css) {
+    Object t =
+        ((JavascriptExecutor) driver)
+            .executeScript(
+                "const e = document.querySelector(arguments[0]); return e ? e.textContent : '';",
+                css);
+    return String.valueOf(t);
   }
 }

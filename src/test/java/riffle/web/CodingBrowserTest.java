@@ -105,8 +105,7 @@ class CodingBrowserTest {
   }
 
   static WebDriverWait waiting() {
-    return (WebDriverWait)
-        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+    return Chromium.waiting(driver);
   }
 
   static void open(String screen) {

@@ -7,7 +7,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Duration;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
@@ -69,17 +68,11 @@ class LongAnswerBrowserTest {
   }
 
   static WebDriverWait waiting() {
-    return (WebDriverWait)
-        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+    return Chromium.waiting(driver);
   }
 
   static String text(String css) {
-    Object t =
-        ((JavascriptExecutor) driver)
-            .executeScript(
-                "const e = document.querySelector(arguments[0]); return e ? e.textContent : '';",
-                css);
-    return String.valueOf(t);
+    return Chromium.text(driver, css);
   }
 
   static void open(String screen) {

@@ -9,7 +9,6 @@ import java.net.http.HttpRequest;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.time.Duration;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
@@ -69,17 +68,11 @@ class QueueBrowserTest {
   }
 
   static WebDriverWait waiting() {
-    return (WebDriverWait)
-        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+    return Chromium.waiting(driver);
   }
 
   static String text(String css) {
-    Object t =
-        ((JavascriptExecutor) driver)
-            .executeScript(
-                "const e = document.querySelector(arguments[0]); return e ? e.textContent : '';",
-                css);
-    return String.valueOf(t);
+    return Chromium.text(driver, css);
   }
 
   /** The masked texts of the queue's order, as the API serves them. */

@@ -7,7 +7,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
-import java.time.Duration;
 import java.util.List;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -55,17 +54,11 @@ class SegmentBrowserTest {
   }
 
   static WebDriverWait waiting() {
-    return (WebDriverWait)
-        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+    return Chromium.waiting(driver);
   }
 
   static String text(String css) {
-    Object t =
-        ((JavascriptExecutor) driver)
-            .executeScript(
-                "const e = document.querySelector(arguments[0]); return e ? e.textContent : '';",
-                css);
-    return String.valueOf(t);
+    return Chromium.text(driver, css);
   }
 
   @Test
