@@ -51,6 +51,20 @@ class CliTest {
     return riffleWithInput("", args);
   }
 
+  /** Runs a command that must succeed (exit 0); a failure shows what it printed. */
+  static Run ok(String... args) {
+    Run run = riffle(args);
+    assertEquals(0, run.code(), run.out() + run.err());
+    return run;
+  }
+
+  /** Imports a fixture of this folder as "Wave 1" into a new project in {@code dir}: its path. */
+  static String projectWith(Path dir, String fixture) {
+    String project = dir.resolve("shop.riffle").toString();
+    ok("import", "--project", project, "--file", fixture(fixture).toString(), "--wave", "Wave 1");
+    return project;
+  }
+
   static Path fixture(String name) {
     try {
       return Path.of(CliTest.class.getResource("/riffle/cli/" + name).toURI());

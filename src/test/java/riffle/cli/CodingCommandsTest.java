@@ -18,27 +18,11 @@ class CodingCommandsTest {
 
   @BeforeEach
   void importWave() {
-    project = dir.resolve("shop.riffle").toString();
-    CliTest.Run run =
-        CliTest.riffle(
-            "import",
-            "--project",
-            project,
-            "--file",
-            CliTest.fixture("two-questions.csv").toString(),
-            "--wave",
-            "Wave 1");
-    assertEquals(0, run.code(), run.err());
-  }
-
-  CliTest.Run ok(String... args) {
-    CliTest.Run run = CliTest.riffle(args);
-    assertEquals(0, run.code(), run.out() + run.err());
-    return run;
+    project = CliTest.projectWith(dir, "two-questions.csv");
   }
 
   JsonNode codes() throws Exception {
-    return ok("codes", "--project", project, "--json").json().get("codes");
+    return CliTest.ok("codes", "--project", project, "--json").json().get("codes");
   }
 
   JsonNode codeNamed(String name) throws Exception {
@@ -52,13 +36,13 @@ class CodingCommandsTest {
 
   long firstAnswer(String query) throws Exception {
     JsonNode hits =
-        ok("search", "--project", project, "--query", query, "--json").json().get("hits");
+        CliTest.ok("search", "--project", project, "--query", query, "--json").json().get("hits");
     return hits.get(0).get("answer_id").asLong();
   }
 
   @Test
   void aCodebookIsBuiltChangedAndUndoneFromTheCommandLine() throws Exception {
-    ok(
+    CliTest.ok(
         "codes",
         "add",
         "--project",
@@ -72,7 +56,7 @@ class CodingCommandsTest {
         "ana");
     long fit = firstAnswer("cabinets");
     String gave =
-        ok(
+        CliTest.ok(
                 "code",
                 "--project",
                 project,
@@ -89,7 +73,7 @@ class CodingCommandsTest {
     assertEquals(1, codeNamed("Fit").get("answers").asInt());
     assertEquals(1, codeNamed("fit on the counter").get("answers").asInt(), "imported code");
 
-    ok(
+    CliTest.ok(
         "codes",
         "merge",
         "--project",
@@ -100,36 +84,44 @@ class CodingCommandsTest {
         "--coder",
         "ana");
     assertEquals(1, codeNamed("Fit").get("answers").asInt(), "the same answer: collapsed");
-    ok("undo", "--project", project, "--coder", "ana");
+    CliTest.ok("undo", "--project", project, "--coder", "ana");
     assertEquals(1, codeNamed("fit on the counter").get("answers").asInt(), "merge undone");
-    String redo = ok("redo", "--project", project, "--coder", "ana").out();
+    String redo = CliTest.ok("redo", "--project", project, "--coder", "ana").out();
     assertTrue(redo.startsWith("Redid: Merged"), redo);
 
-    JsonNode history = ok("history", "--project", project, "--json").json().get("history");
+    JsonNode history = CliTest.ok("history", "--project", project, "--json").json().get("history");
     assertEquals("redo", history.get(0).get("action").asText());
     assertEquals("ana", history.get(0).get("actor").asText());
   }
 
   @Test
   void aRuleIsPreviewedAppliedAndKeepsOffWhereAPersonSaidNo() throws Exception {
-    ok("codes", "add", "--project", project, "Price");
+    CliTest.ok("codes", "add", "--project", project, "Price");
     JsonNode preview =
-        ok("rules", "preview", "--project", project, "Price", "--query", "price OR steep", "--json")
+        CliTest.ok(
+                "rules",
+                "preview",
+                "--project",
+                project,
+                "Price",
+                "--query",
+                "price OR steep",
+                "--json")
             .json();
     assertEquals(2, preview.get("would_code").asInt(), preview.toString());
-    ok("rules", "add", "--project", project, "Price", "--query", "price OR steep");
-    String applied = ok("rules", "apply", "--project", project).out();
+    CliTest.ok("rules", "add", "--project", project, "Price", "--query", "price OR steep");
+    String applied = CliTest.ok("rules", "apply", "--project", project).out();
     assertTrue(applied.contains("2 answer(s) coded, 2 code(s) given"), applied);
     assertEquals(2, codeNamed("Price").get("answers").asInt());
     long steep = firstAnswer("steep");
-    ok("code", "--project", project, "--answer", Long.toString(steep), "--remove", "Price");
-    String again = ok("rules", "apply", "--project", project).out();
+    CliTest.ok("code", "--project", project, "--answer", Long.toString(steep), "--remove", "Price");
+    String again = CliTest.ok("rules", "apply", "--project", project).out();
     assertTrue(again.contains("0 answer(s) coded, 0 code(s) given; 1 left alone"), again);
     assertEquals(1, codeNamed("Price").get("answers").asInt());
   }
 
   int readInQuestionTwo() throws Exception {
-    return ok("report", "--project", project, "--question", "2", "--json")
+    return CliTest.ok("report", "--project", project, "--question", "2", "--json")
         .json()
         .get("questions")
         .get(0)
@@ -144,13 +136,14 @@ class CodingCommandsTest {
     assertEquals(0, readInQuestionTwo(), "no codes column for this question: nothing read");
     String answer = Long.toString(firstAnswer("grinders"));
     String marked =
-        ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana").out();
+        CliTest.ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana")
+            .out();
     assertTrue(marked.contains("as read: no other code applies"), marked);
     assertEquals(1, readInQuestionTwo());
-    ok("undo", "--project", project, "--coder", "ana");
+    CliTest.ok("undo", "--project", project, "--coder", "ana");
     assertEquals(0, readInQuestionTwo(), "undone");
-    ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana");
-    ok("code", "--project", project, "--answer", answer, "--none-off", "--coder", "eli");
+    CliTest.ok("code", "--project", project, "--answer", answer, "--none", "--coder", "ana");
+    CliTest.ok("code", "--project", project, "--answer", answer, "--none-off", "--coder", "eli");
     assertEquals(0, readInQuestionTwo(), "the mark taken off");
     CliTest.Run both =
         CliTest.riffle("code", "--project", project, "--answer", answer, "--none", "--add", "X");
@@ -159,7 +152,7 @@ class CodingCommandsTest {
 
   @Test
   void badRequestsExitTwoWithAMessageAndChangeNothing() throws Exception {
-    ok("codes", "add", "--project", project, "Price", "--key", "p");
+    CliTest.ok("codes", "add", "--project", project, "Price", "--key", "p");
     CliTest.Run dup = CliTest.riffle("codes", "add", "--project", project, "PRICE");
     assertEquals(2, dup.code());
     assertTrue(dup.err().contains("already a code named \"Price\""), dup.err());
@@ -174,24 +167,26 @@ class CodingCommandsTest {
             "code", "--project", project, "--answer", "1", "--add", "Price", "--span", "x");
     assertEquals(2, span.code());
     assertTrue(span.err().contains("START:END"), span.err());
-    assertTrue(ok("rules", "--project", project).out().contains("No rules yet"));
+    assertTrue(CliTest.ok("rules", "--project", project).out().contains("No rules yet"));
   }
 
   @Test
   void theCodebookTravelsAsCsvAndJson() throws Exception {
-    ok("codes", "add", "--project", project, "Delivery", "--direction", "friction");
-    ok("codes", "add", "--project", project, "=Date unclear", "--theme", "Delivery", "--key", "d");
+    CliTest.ok("codes", "add", "--project", project, "Delivery", "--direction", "friction");
+    CliTest.ok(
+        "codes", "add", "--project", project, "=Date unclear", "--theme", "Delivery", "--key", "d");
     Path csv = dir.resolve("book.csv");
-    ok("codes", "save", "--project", project, "--out", csv.toString());
+    CliTest.ok("codes", "save", "--project", project, "--out", csv.toString());
     String text = Files.readString(csv, StandardCharsets.UTF_8);
     assertTrue(text.contains("'=Date unclear,Delivery,friction,d"), text);
 
     Path json = dir.resolve("book.json");
-    ok("codes", "save", "--project", project, "--out", json.toString());
+    CliTest.ok("codes", "save", "--project", project, "--out", json.toString());
     String other = dir.resolve("other.riffle").toString();
-    ok("import", "--project", other, "--file", CliTest.fixture("two-questions.csv").toString());
-    ok("codes", "load", "--project", other, "--file", json.toString());
-    JsonNode loaded = ok("codes", "--project", other, "--json").json().get("codes");
+    CliTest.ok(
+        "import", "--project", other, "--file", CliTest.fixture("two-questions.csv").toString());
+    CliTest.ok("codes", "load", "--project", other, "--file", json.toString());
+    JsonNode loaded = CliTest.ok("codes", "--project", other, "--json").json().get("codes");
     boolean found = false;
     for (JsonNode c : loaded) {
       if (c.get("code").get("name").asText().equals("=Date unclear")) {

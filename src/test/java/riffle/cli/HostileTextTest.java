@@ -29,17 +29,7 @@ class HostileTextTest {
 
   @BeforeEach
   void importTheFixture() {
-    project = dir.resolve("shop.riffle").toString();
-    CliTest.Run run =
-        CliTest.riffle(
-            "import",
-            "--project",
-            project,
-            "--file",
-            CliTest.fixture("control-characters.csv").toString(),
-            "--wave",
-            "Wave 1");
-    assertEquals(0, run.code(), run.err());
+    project = CliTest.projectWith(dir, "control-characters.csv");
   }
 
   /** The characters of the fixture's answers, read from the file itself. */

@@ -52,32 +52,27 @@ class PlantedLeakTest {
     Path file = dir.resolve("planted.csv");
     Files.writeString(file, csv, StandardCharsets.UTF_8);
     project = dir.resolve("planted.riffle").toString();
-    ok("import", "--project", project, "--file", file.toString(), "--wave", "Planted");
-    ok("codes", "load", "--project", project, "--file", "sample-responses/codebook.csv");
+    CliTest.ok("import", "--project", project, "--file", file.toString(), "--wave", "Planted");
+    CliTest.ok("codes", "load", "--project", project, "--file", "sample-responses/codebook.csv");
   }
 
   static String quoted(String cell) {
     return "\"" + cell.replace("\"", "\"\"") + "\"";
   }
 
-  static CliTest.Run ok(String... args) {
-    CliTest.Run run = CliTest.riffle(args);
-    assertEquals(0, run.code(), run.out() + run.err());
-    return run;
-  }
-
   @Test
   void noPlantedValueReachesQuotesSearchExportsOrTheBoard() throws Exception {
     Map<String, String> outputs = new LinkedHashMap<>();
-    JsonNode quotes = ok("quotes", "--project", project, "--json").json();
+    JsonNode quotes = CliTest.ok("quotes", "--project", project, "--json").json();
     List<JsonNode> ranked = new ArrayList<>();
     quotes.get("codes").forEach(c -> c.get("quotes").forEach(ranked::add));
     assertTrue(ranked.size() >= 12, "quotes per code: " + quotes);
     outputs.put("quotes --json", quotes.toString());
-    outputs.put("quotes", ok("quotes", "--project", project).out());
+    outputs.put("quotes", CliTest.ok("quotes", "--project", project).out());
 
     JsonNode search =
-        ok("search", "--project", project, "--query", "is:coded", "--limit", "500", "--json")
+        CliTest.ok(
+                "search", "--project", project, "--query", "is:coded", "--limit", "500", "--json")
             .json();
     assertEquals(answers, search.get("total").asInt(), "every answer is a search hit");
     StringBuilder hits = new StringBuilder();
@@ -87,7 +82,7 @@ class PlantedLeakTest {
     String[] slots = {"headline", "proof", "objection", "benefit"};
     for (int k = 0; k < 8; k++) {
       JsonNode q = ranked.get(k * ranked.size() / 8);
-      ok(
+      CliTest.ok(
           "board",
           "pin",
           "--project",
@@ -103,7 +98,7 @@ class PlantedLeakTest {
           "--coder",
           "ana");
     }
-    outputs.put("board", ok("board", "--project", project).out());
+    outputs.put("board", CliTest.ok("board", "--project", project).out());
     for (String[] export :
         List.of(
             new String[] {"coded", "csv", "coded.csv"},
@@ -112,7 +107,7 @@ class PlantedLeakTest {
             new String[] {"quotes", "txt", "board.txt"},
             new String[] {"quotes", "csv", "board.csv"})) {
       Path out = dir.resolve(export[2]);
-      ok(
+      CliTest.ok(
           "export",
           "--project",
           project,
@@ -125,7 +120,7 @@ class PlantedLeakTest {
       outputs.put(export[2], Files.readString(out, StandardCharsets.UTF_8));
     }
     Path longCsv = dir.resolve("coded-long.csv");
-    ok(
+    CliTest.ok(
         "export",
         "--project",
         project,

@@ -21,23 +21,7 @@ class QueueCommandTest {
 
   @BeforeEach
   void importWave() {
-    project = dir.resolve("shop.riffle").toString();
-    CliTest.Run run =
-        CliTest.riffle(
-            "import",
-            "--project",
-            project,
-            "--file",
-            CliTest.fixture("two-questions.csv").toString(),
-            "--wave",
-            "Wave 1");
-    assertEquals(0, run.code(), run.err());
-  }
-
-  CliTest.Run ok(String... args) {
-    CliTest.Run run = CliTest.riffle(args);
-    assertEquals(0, run.code(), run.out() + run.err());
-    return run;
+    project = CliTest.projectWith(dir, "two-questions.csv");
   }
 
   CliTest.Run refused(String... args) {
@@ -50,7 +34,8 @@ class QueueCommandTest {
   List<Long> secondQuestion() throws Exception {
     List<Long> ids = new ArrayList<>();
     JsonNode hits =
-        ok("search", "--project", project, "--query", "question:2", "--limit", "50", "--json")
+        CliTest.ok(
+                "search", "--project", project, "--query", "question:2", "--limit", "50", "--json")
             .json()
             .get("hits");
     hits.forEach(h -> ids.add(h.get("answer_id").asLong()));
@@ -66,7 +51,7 @@ class QueueCommandTest {
   @Test
   void aQueueIsStartedReadInItsOrderAndTellsWhenTheReadingIsARandomSample() throws Exception {
     String started =
-        ok(
+        CliTest.ok(
                 "queue",
                 "start",
                 "--project",
@@ -86,7 +71,7 @@ class QueueCommandTest {
 
     long[] order = ReviewOrder.order(42, secondQuestion());
     JsonNode next =
-        ok(
+        CliTest.ok(
                 "queue",
                 "next",
                 "--project",
@@ -106,8 +91,8 @@ class QueueCommandTest {
     assertEquals("ana", next.get("status").get("queue").get("started_by").asText());
     assertEquals(1, next.get("answers").get(0).get("position").asInt());
 
-    ok("codes", "add", "--project", project, "Value", "--coder", "ana");
-    ok(
+    CliTest.ok("codes", "add", "--project", project, "Value", "--coder", "ana");
+    CliTest.ok(
         "code",
         "--project",
         project,
@@ -118,7 +103,8 @@ class QueueCommandTest {
         "--coder",
         "ana");
     String text =
-        ok("queue", "next", "--project", project, "--wave", "Wave 1", "--question", "2").out();
+        CliTest.ok("queue", "next", "--project", project, "--wave", "Wave 1", "--question", "2")
+            .out();
     assertTrue(text.contains("Read the first 1 of 8 answers"), text);
     assertTrue(text.contains("a random sample"), text);
     assertTrue(text.contains("#2 "), text);
@@ -127,7 +113,7 @@ class QueueCommandTest {
         text.contains(" " + order[0] + " "), "the read answer is not served again: " + text);
 
     // Coding the fifth answer out of order: no longer a sample, and the page says so.
-    ok(
+    CliTest.ok(
         "code",
         "--project",
         project,
@@ -137,25 +123,26 @@ class QueueCommandTest {
         "Value",
         "--coder",
         "ana");
-    JsonNode list = ok("queue", "--project", project, "--json").json().get("queues");
+    JsonNode list = CliTest.ok("queue", "--project", project, "--json").json().get("queues");
     assertEquals(1, list.size());
     JsonNode sample = list.get(0).get("sample");
     assertFalse(sample.get("random").asBoolean());
     assertEquals(1, sample.get("outside").asInt());
     assertEquals(3, sample.get("skipped").asInt());
-    String listed = ok("queue", "--project", project).out();
+    String listed = CliTest.ok("queue", "--project", project).out();
     assertTrue(listed.contains("not a random sample"), listed);
     assertTrue(listed.contains("Wave 1 · What made you choose us? · seed 42"), listed);
   }
 
   @Test
   void startingAgainKeepsTheOrderAndBadRequestsChangeNothing() throws Exception {
-    ok("queue", "start", "--project", project, "--wave", "Wave 1", "--question", "2");
+    CliTest.ok("queue", "start", "--project", project, "--wave", "Wave 1", "--question", "2");
     String again =
-        ok("queue", "start", "--project", project, "--wave", "Wave 1", "--question", "2").out();
+        CliTest.ok("queue", "start", "--project", project, "--wave", "Wave 1", "--question", "2")
+            .out();
     assertTrue(again.contains("it goes on"), again);
     long seed =
-        ok("queue", "--project", project, "--json")
+        CliTest.ok("queue", "--project", project, "--json")
             .json()
             .get("queues")
             .get(0)
@@ -229,7 +216,7 @@ class QueueCommandTest {
   @Test
   void aSegmentHasItsOwnQueue() throws Exception {
     JsonNode s =
-        ok(
+        CliTest.ok(
                 "queue",
                 "start",
                 "--project",
@@ -247,7 +234,7 @@ class QueueCommandTest {
     assertEquals("device", s.get("queue").get("segment_column").asText());
     assertEquals(4, s.get("sample").get("answers").asInt(), "four mobile respondents");
     JsonNode next =
-        ok(
+        CliTest.ok(
                 "queue",
                 "next",
                 "--project",

@@ -36,15 +36,9 @@ class QuotesCommandTest {
     assertEquals(0, run.code(), run.err());
   }
 
-  static CliTest.Run ok(String... args) {
-    CliTest.Run run = CliTest.riffle(args);
-    assertEquals(0, run.code(), run.out() + run.err());
-    return run;
-  }
-
   @Test
   void quotesArePinnedAnnotatedExportedAndUndone() throws Exception {
-    JsonNode quotes = ok("quotes", "--project", project, "--json").json().get("quotes");
+    JsonNode quotes = CliTest.ok("quotes", "--project", project, "--json").json().get("quotes");
     assertTrue(quotes.size() > 10, quotes.toString());
     JsonNode headline = null;
     JsonNode objection = null;
@@ -61,10 +55,12 @@ class QuotesCommandTest {
     }
     assertTrue(headline != null && objection != null, quotes.toString());
     assertTrue(
-        ok("quotes", "--project", project).out().startsWith("Quotes come from survey answers"),
+        CliTest.ok("quotes", "--project", project)
+            .out()
+            .startsWith("Quotes come from survey answers"),
         "the consent notice comes first");
 
-    ok(
+    CliTest.ok(
         "board",
         "pin",
         "--project",
@@ -79,7 +75,7 @@ class QuotesCommandTest {
         headline.get("code").asText(),
         "--coder",
         "ana");
-    ok(
+    CliTest.ok(
         "board",
         "pin",
         "--project",
@@ -92,7 +88,7 @@ class QuotesCommandTest {
         objection.get("text").asText(),
         "--coder",
         "ana");
-    ok(
+    CliTest.ok(
         "board",
         "line",
         "--project",
@@ -105,13 +101,13 @@ class QuotesCommandTest {
         "Our working headline",
         "--coder",
         "ana");
-    JsonNode board = ok("board", "--project", project, "--json").json();
+    JsonNode board = CliTest.ok("board", "--project", project, "--json").json();
     JsonNode pinned = board.get("slots").get(0).get("items").get(0);
     assertEquals(headline.get("text").asText(), pinned.get("text").asText());
     assertEquals("Our working headline", pinned.get("working_line").asText());
 
     Path md = dir.resolve("board.md");
-    ok(
+    CliTest.ok(
         "export",
         "--project",
         project,
@@ -140,9 +136,9 @@ class QuotesCommandTest {
     assertEquals(2, bad.code());
     assertTrue(bad.err().contains("own words as written"), bad.err());
 
-    ok("undo", "--project", project, "--coder", "ana");
-    ok("undo", "--project", project, "--coder", "ana");
-    JsonNode after = ok("board", "--project", project, "--json").json();
+    CliTest.ok("undo", "--project", project, "--coder", "ana");
+    CliTest.ok("undo", "--project", project, "--coder", "ana");
+    JsonNode after = CliTest.ok("board", "--project", project, "--json").json();
     assertEquals(1, after.get("slots").get(0).get("items").size());
     assertFalse(
         after.get("slots").get(0).get("items").get(0).has("working_line")

@@ -20,17 +20,7 @@ class ReportCommandTest {
 
   @BeforeEach
   void importCodedWave() {
-    project = dir.resolve("shop.riffle").toString();
-    CliTest.Run run =
-        CliTest.riffle(
-            "import",
-            "--project",
-            project,
-            "--file",
-            CliTest.fixture("two-questions.csv").toString(),
-            "--wave",
-            "Wave 1");
-    assertEquals(0, run.code(), run.err());
+    project = CliTest.projectWith(dir, "two-questions.csv");
   }
 
   @Test
