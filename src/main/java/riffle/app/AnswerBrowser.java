@@ -1,6 +1,5 @@
 package riffle.app;
 
-import java.io.IOException;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
@@ -8,13 +7,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import riffle.coding.Codebook;
-import riffle.index.AnswerIndex;
 import riffle.index.QuerySyntaxException;
 import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.Code;
 import riffle.model.InputException;
-import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
 
 /**
@@ -24,11 +21,11 @@ import riffle.store.ProjectStore;
  */
 public final class AnswerBrowser {
   private final ProjectStore store;
-  private final Project project;
+  private final AnswerSearch search;
 
-  AnswerBrowser(ProjectStore store, Project project) {
+  AnswerBrowser(ProjectStore store, AnswerSearch search) {
     this.store = store;
-    this.project = project;
+    this.search = search;
   }
 
   /**
@@ -43,14 +40,13 @@ public final class AnswerBrowser {
     List<String> questions = store.questions();
     String filters = filters(query, questions);
     String text = query.text().strip();
-    AnswerIndex index = project.index();
     if (!balanced(text)) {
       // Wrapped in brackets, "a) OR (b" would read as a different query: report its problem.
-      matches(index, text, "", questions);
+      matches(text, "", questions);
     }
     String whole =
         text.isEmpty() ? filters : filters.isEmpty() ? text : "(" + text + ") AND " + filters;
-    long[] ids = matches(index, whole, text, questions);
+    long[] ids = matches(whole, text, questions);
     long[] readIds = store.readAnswerIds();
     if (query.coded().isPresent() && !query.coded().get()) {
       // "Not coded yet" leaves out the answers a person marked as read with no code applying.
@@ -58,8 +54,8 @@ public final class AnswerBrowser {
     }
     int coded =
         whole.isEmpty()
-            ? matches(index, "is:coded", "", questions).length
-            : matches(index, "(" + whole + ") AND is:coded", text, questions).length;
+            ? matches("is:coded", "", questions).length
+            : matches("(" + whole + ") AND is:coded", text, questions).length;
     long[] nonAnswers = store.nonAnswerIds();
     int substantive = ids.length - common(ids, nonAnswers);
     int read = common(without(ids, nonAnswers), readIds);
@@ -201,21 +197,14 @@ public final class AnswerBrowser {
    * The ids the whole query matches. When it cannot be read, the search text alone is read again,
    * so that the problem's column points into what the person typed.
    */
-  private static long[] matches(AnswerIndex index, String whole, String text, List<String> qs)
-      throws InputException {
+  private long[] matches(String whole, String text, List<String> qs) throws InputException {
     try {
-      try {
-        return index.matches(whole, qs);
-      } catch (QuerySyntaxException e) {
-        if (!text.isEmpty() && !text.equals(whole)) {
-          index.matches(text, qs);
-        }
-        throw e;
-      }
+      return search.matches(whole, qs);
     } catch (QuerySyntaxException e) {
+      if (!text.isEmpty() && !text.equals(whole)) {
+        search.matches(text, qs);
+      }
       throw e;
-    } catch (IOException e) {
-      throw new ProjectFileException("the search index cannot be read: " + e.getMessage());
     }
   }
 }

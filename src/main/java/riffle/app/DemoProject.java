@@ -83,7 +83,7 @@ public final class DemoProject {
                       progress));
             }
             // The pilot's codes get their themes and directions from the demo's codebook file.
-            p.coding().importCodebook("demo", CODEBOOK, resource(CODEBOOK));
+            p.codebook().importCodebook("demo", CODEBOOK, resource(CODEBOOK));
             return null;
           });
     } catch (UnreadableInputException e) {

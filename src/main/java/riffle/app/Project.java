@@ -1,6 +1,5 @@
 package riffle.app;
 
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
@@ -8,7 +7,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Consumer;
-import riffle.index.AnswerIndex;
 import riffle.ingest.SurveyTable;
 import riffle.model.Analysis;
 import riffle.model.InputException;
@@ -27,11 +25,12 @@ import riffle.text.TextAnalyzer;
 /** An open project and the use cases on it. Not thread-safe: one instance per thread. */
 public final class Project implements AutoCloseable {
   private final ProjectStore store;
-  private AnswerIndex index;
+  private final AnswerSearch search;
   private List<String> notices = List.of();
 
   private Project(ProjectStore store) {
     this.store = store;
+    this.search = new AnswerSearch(store);
   }
 
   /**
@@ -103,10 +102,9 @@ public final class Project implements AutoCloseable {
       throws InputException {
     long lastBefore = store.lastAnswerId();
     ImportReport report =
-        new WaveImporter(store, work -> Indexes.whileStoring(store, index, work), analysed)
-            .store(request, table, progress);
+        new WaveImporter(store, search::whileStoring, analysed).store(request, table, progress);
     if (!store.rules().isEmpty() && store.lastAnswerId() > lastBefore) {
-      coding().applyRules(request.actor(), java.util.OptionalLong.empty(), lastBefore);
+      rules().applyRules(request.actor(), java.util.OptionalLong.empty(), lastBefore);
     }
     return report;
   }
@@ -138,10 +136,7 @@ public final class Project implements AutoCloseable {
 
   /** Folds the project into its one file, as before moving it (see {@link NewProject}). */
   void foldIntoOneFile() throws ProjectFileException {
-    if (index != null) {
-      index.close();
-      index = null;
-    }
+    search.close();
     store.foldIntoOneFile();
   }
 
@@ -179,13 +174,7 @@ public final class Project implements AutoCloseable {
    * @throws InputException when the query cannot be read; its problem gives the column
    */
   public SearchResult search(String query, int limit) throws InputException {
-    try {
-      return index().search(query, store.questions(), limit);
-    } catch (InputException e) {
-      throw e;
-    } catch (IOException e) {
-      throw new ProjectFileException("the search index cannot be read: " + e.getMessage());
-    }
+    return search.search(query, limit);
   }
 
   /**
@@ -200,11 +189,7 @@ public final class Project implements AutoCloseable {
 
   /** Answers like the given one, most alike first. */
   public SearchResult similar(long answerId, int limit) throws InputException {
-    try {
-      return index().similar(answerId, limit);
-    } catch (IOException e) {
-      throw new ProjectFileException("the search index cannot be read: " + e.getMessage());
-    }
+    return search.similar(answerId, limit);
   }
 
   /** Every answer's id, in the order stored. */
@@ -265,9 +250,19 @@ public final class Project implements AutoCloseable {
     return new Reporting(store);
   }
 
-  /** The codebook, the coding and the rules. */
+  /** The codebook and the files it is brought in from and written to. */
+  public CodebookEditor codebook() {
+    return new CodebookEditor(store, search);
+  }
+
+  /** The coding of the answers, and the undo and history of every edit. */
   public Coding coding() {
-    return new Coding(store, this);
+    return new Coding(store);
+  }
+
+  /** The rules that code the answers a query matches. */
+  public CodingRules rules() {
+    return new CodingRules(store, search);
   }
 
   /** Random review queues, and whether the answers read are a random sample. */
@@ -277,25 +272,12 @@ public final class Project implements AutoCloseable {
 
   /** Pages through the answers for coding. */
   public AnswerBrowser answers() {
-    return new AnswerBrowser(store, this);
-  }
-
-  /** The open index, brought up to date with the project first. */
-  AnswerIndex index() throws InputException {
-    if (index == null) {
-      index = Indexes.current(store);
-    } else {
-      Indexes.catchUp(store, index);
-    }
-    return index;
+    return new AnswerBrowser(store, search);
   }
 
   @Override
   public void close() {
-    if (index != null) {
-      index.close();
-      index = null;
-    }
+    search.close();
     store.close();
   }
 }

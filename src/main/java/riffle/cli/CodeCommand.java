@@ -65,20 +65,20 @@ final class CodeCommand implements Callable<Integer> {
     return CodesCommand.change(
         spec,
         options,
-        (c, coder) -> {
+        (p, coder) -> {
           if (what.add != null) {
-            return c.assign(coder, answer, c.code(what.add).id(), marked);
+            return p.coding().assign(coder, answer, p.codebook().code(what.add).id(), marked);
           }
           if (what.remove != null) {
-            return c.unassign(coder, answer, c.code(what.remove).id());
+            return p.coding().unassign(coder, answer, p.codebook().code(what.remove).id());
           }
           if (what.none) {
-            return c.markRead(coder, answer);
+            return p.coding().markRead(coder, answer);
           }
           if (what.noneOff) {
-            return c.unmarkRead(coder, answer);
+            return p.coding().unmarkRead(coder, answer);
           }
-          return c.accept(coder, answer, c.code(what.accept).id());
+          return p.coding().accept(coder, answer, p.codebook().code(what.accept).id());
         });
   }
 

@@ -18,7 +18,6 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
-import riffle.app.Coding;
 import riffle.app.Project;
 import riffle.model.Assignment;
 import riffle.model.Code;
@@ -62,7 +61,7 @@ final class CodesCommand implements Callable<Integer> {
     }
     List<Listed> listed = new ArrayList<>();
     try (Project p = Project.openExisting(project)) {
-      List<Code> book = p.coding().codes();
+      List<Code> book = p.codebook().codes();
       Map<Long, Integer> uses = new HashMap<>();
       for (List<Assignment> as : p.coding().assignments(p.answerIds()).values()) {
         as.forEach(a -> uses.merge(a.codeId(), 1, Integer::sum));
@@ -101,9 +100,9 @@ final class CodesCommand implements Callable<Integer> {
     return 0;
   }
 
-  /** Runs one change with the open project's coding. */
+  /** Runs one change to the open project. */
   interface Work {
-    EditOutcome run(Coding coding, String coder) throws InputException;
+    EditOutcome run(Project project, String coder) throws InputException;
   }
 
   /** Runs one change to the copy board. */
@@ -124,7 +123,7 @@ final class CodesCommand implements Callable<Integer> {
   static int change(CommandSpec spec, CodingOptions options, Work change) throws InputException {
     EditOutcome outcome;
     try (Project p = Project.openExisting(options.project)) {
-      outcome = change.run(p.coding(), options.coder());
+      outcome = change.run(p, options.coder());
     }
     options.print(spec.commandLine().getOut(), outcome);
     return 0;
@@ -144,8 +143,8 @@ final class CodesCommand implements Callable<Integer> {
       return change(
           spec,
           options,
-          (c, coder) -> {
-            Code made = c.create(coder, fields.draft(Optional.of(name)));
+          (p, coder) -> {
+            Code made = p.codebook().create(coder, fields.draft(Optional.of(name)));
             return new EditOutcome(0, "create-code", 1, 0, "Created code \"" + made.name() + "\".");
           });
     }
@@ -178,9 +177,10 @@ final class CodesCommand implements Callable<Integer> {
       return change(
           spec,
           options,
-          (c, coder) -> {
-            Code before = c.code(code);
-            Code after = c.change(coder, before.id(), fields.draft(Optional.ofNullable(rename)));
+          (p, coder) -> {
+            Code before = p.codebook().code(code);
+            Code after =
+                p.codebook().change(coder, before.id(), fields.draft(Optional.ofNullable(rename)));
             if (examples != null) {
               List<Long> ids = new ArrayList<>();
               for (String e : examples) {
@@ -193,7 +193,7 @@ final class CodesCommand implements Callable<Integer> {
                   }
                 }
               }
-              c.setExamples(coder, after.id(), ids);
+              p.codebook().setExamples(coder, after.id(), ids);
             }
             return new EditOutcome(0, "change-code", 1, 0, "Saved \"" + after.name() + "\".");
           });
@@ -223,12 +223,12 @@ final class CodesCommand implements Callable<Integer> {
       return change(
           spec,
           options,
-          (c, coder) -> {
+          (p, coder) -> {
             List<Long> ids = new ArrayList<>();
             for (String s : sources) {
-              ids.add(c.code(s).id());
+              ids.add(p.codebook().code(s).id());
             }
-            return c.merge(coder, ids, c.code(into).id());
+            return p.codebook().merge(coder, ids, p.codebook().code(into).id());
           });
     }
   }
@@ -275,11 +275,11 @@ final class CodesCommand implements Callable<Integer> {
       return change(
           spec,
           options,
-          (c, coder) -> {
-            long id = c.code(code).id();
+          (p, coder) -> {
+            long id = p.codebook().code(code).id();
             return which.query != null
-                ? c.split(coder, id, fields.draft(Optional.of(into)), which.query)
-                : c.split(coder, id, fields.draft(Optional.of(into)), which.answers);
+                ? p.codebook().split(coder, id, fields.draft(Optional.of(into)), which.query)
+                : p.codebook().split(coder, id, fields.draft(Optional.of(into)), which.answers);
           });
     }
   }
@@ -297,7 +297,10 @@ final class CodesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InputException {
-      return change(spec, options, (c, coder) -> c.archive(coder, c.code(code).id(), true));
+      return change(
+          spec,
+          options,
+          (p, coder) -> p.codebook().archive(coder, p.codebook().code(code).id(), true));
     }
   }
 
@@ -314,7 +317,10 @@ final class CodesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InputException {
-      return change(spec, options, (c, coder) -> c.archive(coder, c.code(code).id(), false));
+      return change(
+          spec,
+          options,
+          (p, coder) -> p.codebook().archive(coder, p.codebook().code(code).id(), false));
     }
   }
 
@@ -331,7 +337,8 @@ final class CodesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InputException {
-      return change(spec, options, (c, coder) -> c.remove(coder, c.code(code).id()));
+      return change(
+          spec, options, (p, coder) -> p.codebook().remove(coder, p.codebook().code(code).id()));
     }
   }
 
@@ -355,7 +362,10 @@ final class CodesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InputException {
-      return change(spec, options, (c, coder) -> c.reorder(coder, c.code(code).id(), place));
+      return change(
+          spec,
+          options,
+          (p, coder) -> p.codebook().reorder(coder, p.codebook().code(code).id(), place));
     }
   }
 
@@ -373,7 +383,7 @@ final class CodesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InputException {
-      return change(spec, options, (c, coder) -> c.importCodebook(coder, file));
+      return change(spec, options, (p, coder) -> p.codebook().importCodebook(coder, file));
     }
   }
 
@@ -392,7 +402,7 @@ final class CodesCommand implements Callable<Integer> {
     public Integer call() throws InputException {
       String text;
       try (Project p = Project.openExisting(options.project)) {
-        text = p.coding().exportCodebook(file.getFileName().toString());
+        text = p.codebook().exportCodebook(file.getFileName().toString());
       }
       try {
         Files.writeString(file, text, StandardCharsets.UTF_8);

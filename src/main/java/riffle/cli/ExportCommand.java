@@ -96,8 +96,8 @@ final class ExportCommand implements Callable<Integer> {
             }
             case CODEBOOK ->
                 switch (format) {
-                  case CSV -> (bom ? "\uFEFF" : "") + p.coding().exportCodebook("codebook.csv");
-                  case JSON -> p.coding().exportCodebook("codebook.json");
+                  case CSV -> (bom ? "\uFEFF" : "") + p.codebook().exportCodebook("codebook.csv");
+                  case JSON -> p.codebook().exportCodebook("codebook.json");
                   case MD -> p.reporting().codebookMarkdown("Codebook — " + title);
                   case HTML, TXT ->
                       throw new IllegalArgumentException(

@@ -19,6 +19,6 @@ final class RedoCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws InputException {
-    return CodesCommand.change(spec, options, (c, coder) -> c.redo(coder));
+    return CodesCommand.change(spec, options, (p, coder) -> p.coding().redo(coder));
   }
 }

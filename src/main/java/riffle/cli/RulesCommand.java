@@ -55,8 +55,8 @@ final class RulesCommand implements Callable<Integer> {
     List<Rule> rules;
     Map<Long, String> names = new HashMap<>();
     try (Project p = Project.openExisting(project)) {
-      rules = p.coding().rules();
-      for (Code c : p.coding().codes()) {
+      rules = p.rules().rules();
+      for (Code c : p.codebook().codes()) {
         names.put(c.id(), c.name());
       }
     }
@@ -93,8 +93,8 @@ final class RulesCommand implements Callable<Integer> {
       return CodesCommand.change(
           spec,
           options,
-          (c, coder) -> {
-            Rule r = c.addRule(coder, c.code(code).id(), query);
+          (p, coder) -> {
+            Rule r = p.rules().addRule(coder, p.codebook().code(code).id(), query);
             return new EditOutcome(
                 0,
                 "add-rule",
@@ -130,7 +130,7 @@ final class RulesCommand implements Callable<Integer> {
     public Integer call() throws InputException {
       RulePreview preview;
       try (Project p = Project.openExisting(options.project)) {
-        preview = p.coding().preview(p.coding().code(code).id(), query, Math.max(0, sample));
+        preview = p.rules().preview(p.codebook().code(code).id(), query, Math.max(0, sample));
       }
       PrintWriter out = spec.commandLine().getOut();
       if (options.json.enabled) {
@@ -175,9 +175,13 @@ final class RulesCommand implements Callable<Integer> {
       return CodesCommand.change(
           spec,
           options,
-          (c, coder) ->
-              c.applyRules(
-                  coder, code == null ? OptionalLong.empty() : OptionalLong.of(c.code(code).id())));
+          (p, coder) ->
+              p.rules()
+                  .applyRules(
+                      coder,
+                      code == null
+                          ? OptionalLong.empty()
+                          : OptionalLong.of(p.codebook().code(code).id())));
     }
   }
 
@@ -194,7 +198,7 @@ final class RulesCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws InputException {
-      return CodesCommand.change(spec, options, (c, coder) -> c.removeRule(coder, id));
+      return CodesCommand.change(spec, options, (p, coder) -> p.rules().removeRule(coder, id));
     }
   }
 }

@@ -23,6 +23,6 @@ final class UndoCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws InputException {
-    return CodesCommand.change(spec, options, (c, coder) -> c.undo(coder));
+    return CodesCommand.change(spec, options, (p, coder) -> p.coding().undo(coder));
   }
 }

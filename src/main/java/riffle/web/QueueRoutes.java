@@ -44,7 +44,7 @@ final class QueueRoutes {
 
   void start(Context ctx) throws Exception {
     StartBody body = Json.body(ctx, StartBody.class);
-    String coder = CodingRoutes.coder(body.coder());
+    String coder = Requests.coder(body.coder());
     QueueKey key = key(body.wave(), body.question(), body.segment(), true);
     OptionalLong seed = body.seed() == null ? OptionalLong.empty() : OptionalLong.of(body.seed());
     QueueStatus s = access.call(p -> p.queues().start(coder, key, seed));
@@ -68,8 +68,8 @@ final class QueueRoutes {
     OptionalInt offset =
         given == null || given.isBlank()
             ? OptionalInt.empty()
-            : OptionalInt.of(QueryParams.wholeNumber(ctx, "offset", 0, 0, Integer.MAX_VALUE));
-    int limit = QueryParams.wholeNumber(ctx, "limit", 50, 1, AnswerQuery.MAX_LIMIT);
+            : OptionalInt.of(Requests.wholeNumber(ctx, "offset", 0, 0, Integer.MAX_VALUE));
+    int limit = Requests.wholeNumber(ctx, "limit", 50, 1, AnswerQuery.MAX_LIMIT);
     QueuePage page =
         access.call(p -> p.queues().page(key, offset, limit)).orElseThrow(() -> notStarted(key));
     List<Map<String, Object>> answers = new ArrayList<>();

@@ -54,7 +54,8 @@ final class QuoteRoutes {
       }
       segments.put(ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
     }
-    QuoteQuery query = new QuoteQuery(text(ctx, "code"), text(ctx, "wave"), segments);
+    QuoteQuery query =
+        new QuoteQuery(Requests.text(ctx, "code"), Requests.text(ctx, "wave"), segments);
     ctx.json(access.call(p -> p.quotes().rank(query)));
   }
 
@@ -64,7 +65,7 @@ final class QuoteRoutes {
 
   void pin(Context ctx) throws Exception {
     PinBody body = Json.body(ctx, PinBody.class);
-    String coder = CodingRoutes.coder(body.coder());
+    String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     if (body.answerId() == null) {
       throw ApiError.badField("answer_id", "the request needs answer_id (the quote's answer)");
@@ -79,7 +80,7 @@ final class QuoteRoutes {
     change(
         ctx,
         p -> {
-          if (p.coding().codes().stream().noneMatch(c -> c.name().equalsIgnoreCase(code))) {
+          if (p.codebook().codes().stream().noneMatch(c -> c.name().equalsIgnoreCase(code))) {
             throw ApiError.notFound("there is no code named \"" + code + "\" in the codebook");
           }
           return p.quotes().pin(coder, slot, body.answerId(), body.text(), code);
@@ -88,7 +89,7 @@ final class QuoteRoutes {
 
   void unpin(Context ctx) throws Exception {
     ItemBody body = Json.body(ctx, ItemBody.class);
-    String coder = CodingRoutes.coder(body.coder());
+    String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     int index = index(body.index(), "index");
     change(ctx, p -> p.quotes().unpin(coder, slot, index));
@@ -96,7 +97,7 @@ final class QuoteRoutes {
 
   void move(Context ctx) throws Exception {
     MoveBody body = Json.body(ctx, MoveBody.class);
-    String coder = CodingRoutes.coder(body.coder());
+    String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     int from = index(body.from(), "from");
     QuoteSlot to = body.toSlot() == null ? slot : body.toSlot();
@@ -106,7 +107,7 @@ final class QuoteRoutes {
 
   void line(Context ctx) throws Exception {
     LineBody body = Json.body(ctx, LineBody.class);
-    String coder = CodingRoutes.coder(body.coder());
+    String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     int index = index(body.index(), "index");
     String line = body.line() == null ? "" : body.line();
@@ -121,7 +122,7 @@ final class QuoteRoutes {
   }
 
   void export(Context ctx) throws Exception {
-    String format = text(ctx, "format").orElse("md").toLowerCase(Locale.ROOT);
+    String format = Requests.text(ctx, "format").orElse("md").toLowerCase(Locale.ROOT);
     String type =
         switch (format) {
           case "md" -> "text/markdown; charset=utf-8";

@@ -7,25 +7,19 @@ import io.javalin.http.HttpResponseException;
 import io.javalin.http.staticfiles.Location;
 import io.javalin.json.JavalinJackson;
 import io.javalin.validation.ValidationException;
-import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.net.URI;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.SecureRandom;
 import java.util.Base64;
-import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
-import riffle.app.ImportPreview;
-import riffle.app.ImportReport;
-import riffle.app.ImportRequest;
-import riffle.app.PhraseQuery;
-import riffle.app.Project;
+import java.util.function.Consumer;
 import riffle.app.SuggestionTrainer;
 import riffle.model.InputException;
-import riffle.model.ShownText;
 
 /**
  * Serves one project to the browser: the JSON API under {@code /api/} and the page from {@code
@@ -148,14 +142,18 @@ public final class WebServer implements AutoCloseable {
       throw new IllegalStateException(e.getMessage(), e);
     }
     SuggestionTrainer trainer = new SuggestionTrainer(project);
-    CodingRoutes coding = new CodingRoutes(access, trainer);
-    QuoteRoutes quotes = new QuoteRoutes(access);
+    List<Consumer<JavalinConfig>> routes =
+        List.of(
+            new ProjectRoutes(access)::register,
+            new ImportRoutes(access, imports)::register,
+            new CodebookRoutes(access)::register,
+            new RuleRoutes(access)::register,
+            new CodingRoutes(access, trainer)::register,
+            new FindingsRoutes(access)::register,
+            new QuoteRoutes(access)::register);
     Javalin app;
     try {
-      app =
-          Javalin.create(
-                  cfg -> configure(cfg, options, guard, new Api(access, imports), coding, quotes))
-              .start();
+      app = Javalin.create(cfg -> configure(cfg, options, guard, routes)).start();
     } catch (RuntimeException e) {
       trainer.close();
       imports.close();
@@ -182,12 +180,7 @@ public final class WebServer implements AutoCloseable {
   }
 
   private static void configure(
-      JavalinConfig cfg,
-      Options options,
-      Guard guard,
-      Api api,
-      CodingRoutes coding,
-      QuoteRoutes quotes) {
+      JavalinConfig cfg, Options options, Guard guard, List<Consumer<JavalinConfig>> routes) {
     cfg.startup.showJavalinBanner = false;
     cfg.startup.showOldJavalinVersionWarning = false;
     cfg.jetty.host = options.host();
@@ -208,17 +201,7 @@ public final class WebServer implements AutoCloseable {
           sf.headers = Map.of("Cache-Control", "no-cache");
         });
     cfg.routes.before(guard::check);
-    cfg.routes.get("/api/project", api::project);
-    cfg.routes.get("/api/changes", api::changes);
-    cfg.routes.post("/api/uploads", api::upload);
-    cfg.routes.post("/api/import/preview", api::preview);
-    cfg.routes.post("/api/imports", api::startImport);
-    cfg.routes.get("/api/imports/{job}", api::job);
-    cfg.routes.get("/api/search", api::search);
-    cfg.routes.get("/api/answers/{id}/similar", api::similar);
-    cfg.routes.get("/api/phrases", api::phrases);
-    coding.register(cfg);
-    quotes.register(cfg);
+    routes.forEach(r -> r.accept(cfg));
     cfg.routes.exception(Exception.class, Errors::answer);
     cfg.routes.exception(ValidationException.class, Errors::answer);
     cfg.routes.exception(HttpResponseException.class, WebServer::refused);
@@ -280,133 +263,5 @@ public final class WebServer implements AutoCloseable {
     trainer.close();
     imports.close();
     access.close();
-  }
-
-  /** The API's handlers; each uses the project through {@link ProjectAccess} only. */
-  private static final class Api {
-    private final ProjectAccess access;
-    private final Imports imports;
-
-    Api(ProjectAccess access, Imports imports) {
-      this.access = access;
-      this.imports = imports;
-    }
-
-    void project(Context ctx) throws Exception {
-      ctx.json(
-          access.call(
-              p -> {
-                Map<String, Object> out = new LinkedHashMap<>();
-                out.put("name", p.file().getFileName().toString());
-                out.put("summary", p.summary());
-                return out;
-              }));
-    }
-
-    void changes(Context ctx) throws Exception {
-      ctx.json(Map.of("version", access.call(Project::changes)));
-    }
-
-    /** Streams the body to a temporary file; one declared over the limit is refused unread. */
-    void upload(Context ctx) throws IOException {
-      String name = Optional.ofNullable(ctx.queryParam("name")).orElse("").strip();
-      if (name.isEmpty()) {
-        throw ApiError.badParameter("name", "give the file's name as ?name=");
-      }
-      if (ctx.req().getContentLengthLong() > MAX_UPLOAD) {
-        throw Imports.tooLarge(MAX_UPLOAD);
-      }
-      ctx.status(201).json(imports.upload(name, ctx.bodyInputStream()));
-    }
-
-    void preview(Context ctx) throws Exception {
-      Imports.Source source = Json.body(ctx, Imports.Source.class);
-      int rows = source.rows() == null ? 10 : source.rows();
-      if (rows < 1 || rows > 200) {
-        throw ApiError.badField("rows", "rows must be between 1 and 200, not " + rows);
-      }
-      ImportRequest request = imports.request(source, "web");
-      ImportPreview preview = ImportPreview.of(request, rows);
-      ctx.json(preview);
-    }
-
-    void startImport(Context ctx) {
-      Imports.Source source = Json.body(ctx, Imports.Source.class);
-      ImportRequest request = imports.request(source, "web");
-      String job = imports.newJob();
-      access.submit(
-          p -> {
-            try {
-              ImportReport report = p.importWave(request, imports.progress(job));
-              imports.finished(job, report);
-            } catch (Exception e) {
-              imports.failed(job, Errors.of(e).body());
-            }
-            return null;
-          });
-      ctx.status(202).json(imports.job(job));
-    }
-
-    void job(Context ctx) {
-      ctx.json(imports.job(ctx.pathParam("job")));
-    }
-
-    void search(Context ctx) throws Exception {
-      String q = ctx.queryParam("q");
-      if (q == null || q.isBlank()) {
-        throw ApiError.badParameter("q", "write a query, such as delivery or \"delivery date\"");
-      }
-      int limit = QueryParams.wholeNumber(ctx, "limit", 50, 1, MAX_HITS);
-      ctx.json(access.call(p -> p.search(q, limit)).shortened(ShownText.MAX_CHARS));
-    }
-
-    void similar(Context ctx) throws Exception {
-      long id;
-      try {
-        id = Long.parseLong(ctx.pathParam("id"));
-      } catch (NumberFormatException e) {
-        throw new ApiError(
-            400, "the answer id must be a number, not '" + ctx.pathParam("id") + "'");
-      }
-      int limit = QueryParams.wholeNumber(ctx, "limit", 20, 1, MAX_HITS);
-      ctx.json(
-          access.call(
-              p -> {
-                if (!p.answerIds().contains(id)) {
-                  throw ApiError.notFound("there is no answer " + id + " in this project");
-                }
-                return p.similar(id, limit).shortened(ShownText.MAX_CHARS);
-              }));
-    }
-
-    void phrases(Context ctx) throws Exception {
-      Map<String, String> segments = new LinkedHashMap<>();
-      for (String s : ctx.queryParams("segment")) {
-        int eq = s.indexOf('=');
-        if (eq <= 0 || eq == s.length() - 1) {
-          throw ApiError.badParameter(
-              "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
-        }
-        segments.put(
-            ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
-      }
-      PhraseQuery query;
-      try {
-        query =
-            new PhraseQuery(
-                text(ctx, "wave"),
-                text(ctx, "question"),
-                segments,
-                text(ctx, "against"),
-                QueryParams.wholeNumber(ctx, "limit", 30, 1, 500));
-      } catch (IllegalArgumentException e) {
-        throw ApiError.badParameter("against", e.getMessage().replace("--", ""));
-      }
-      ctx.json(access.call(p -> p.phrases(query)));
-    }
-
-    private static Optional<String> text(Context ctx, String name) {
-      return Optional.ofNullable(ctx.queryParam(name)).map(String::strip).filter(s -> !s.isEmpty());
-    }
   }
 }

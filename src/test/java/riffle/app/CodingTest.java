@@ -67,7 +67,7 @@ class CodingTest {
   /** Every (answer → code names) pair in the project, for comparing whole states. */
   static Map<Long, TreeSet<String>> coding(Project p) throws InputException {
     Map<Long, String> names = new TreeMap<>();
-    for (Code c : p.coding().codes()) {
+    for (Code c : p.codebook().codes()) {
       names.put(c.id(), c.name());
     }
     Map<Long, TreeSet<String>> out = new TreeMap<>();
@@ -87,9 +87,9 @@ class CodingTest {
   void renameMergeAndSplitKeepEveryAssignment() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code late = c.create("ana", CodeDraft.named("Delivery date unclear"));
-      Code date = c.create("ana", CodeDraft.named("No date shown"));
-      Code cost = c.create("ana", CodeDraft.named("Shipping cost"));
+      Code late = p.codebook().create("ana", CodeDraft.named("Delivery date unclear"));
+      Code date = p.codebook().create("ana", CodeDraft.named("No date shown"));
+      Code cost = p.codebook().create("ana", CodeDraft.named("Shipping cost"));
       long a1 = answer(p, "not shown anywhere");
       long a3 = answer(p, "could not find");
       long a2 = answer(p, "small order");
@@ -98,7 +98,7 @@ class CodingTest {
       c.assign("ana", a3, date.id(), Optional.empty());
       c.assign("ana", a2, cost.id(), Optional.empty());
 
-      c.change("ana", late.id(), CodeDraft.named("Delivery date missing"));
+      p.codebook().change("ana", late.id(), CodeDraft.named("Delivery date missing"));
       assertEquals(
           Map.of(
               a1, new TreeSet<>(List.of("Delivery date missing", "No date shown")),
@@ -106,7 +106,7 @@ class CodingTest {
               a3, new TreeSet<>(List.of("No date shown"))),
           coding(p));
 
-      EditOutcome merged = c.merge("ana", List.of(date.id()), late.id());
+      EditOutcome merged = p.codebook().merge("ana", List.of(date.id()), late.id());
       assertTrue(
           merged.message().contains("1 assignment(s) moved, 1 already there"), merged.message());
       assertEquals(
@@ -115,9 +115,10 @@ class CodingTest {
               a2, new TreeSet<>(List.of("Shipping cost")),
               a3, new TreeSet<>(List.of("Delivery date missing"))),
           coding(p));
-      assertTrue(c.codes().stream().noneMatch(k -> k.name().equals("No date shown")));
+      assertTrue(p.codebook().codes().stream().noneMatch(k -> k.name().equals("No date shown")));
 
-      c.split("ana", late.id(), CodeDraft.named("Date not found"), "exact:\"could not find\"");
+      p.codebook()
+          .split("ana", late.id(), CodeDraft.named("Date not found"), "exact:\"could not find\"");
       assertEquals(
           Map.of(
               a1, new TreeSet<>(List.of("Delivery date missing")),
@@ -132,40 +133,42 @@ class CodingTest {
   void undoAndRedoRoundTripEveryKindOfChange() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code theme = c.create("ana", CodeDraft.named("Delivery").withDirection(Direction.FRICTION));
-      Code date = c.create("ana", CodeDraft.named("Date unclear").withParent("Delivery"));
-      Code cost = c.create("ana", CodeDraft.named("Cost").withKey("c"));
+      Code theme =
+          p.codebook().create("ana", CodeDraft.named("Delivery").withDirection(Direction.FRICTION));
+      Code date =
+          p.codebook().create("ana", CodeDraft.named("Date unclear").withParent("Delivery"));
+      Code cost = p.codebook().create("ana", CodeDraft.named("Cost").withKey("c"));
       List<Long> ids = p.answerIds();
       List<Map<Long, TreeSet<String>>> states = new ArrayList<>();
       List<List<Code>> books = new ArrayList<>();
       states.add(coding(p));
-      books.add(c.codes());
+      books.add(p.codebook().codes());
       c.assign("ana", ids.get(0), date.id(), Optional.empty());
       c.assign("ana", ids.get(2), date.id(), Optional.of(new Span(0, 3)));
       c.assign("ana", ids.get(1), cost.id(), Optional.empty());
       c.assign("ana", ids.get(2), cost.id(), Optional.empty());
       c.unassign("ana", ids.get(1), cost.id());
-      c.change("ana", cost.id(), CodeDraft.named("Shipping cost"));
-      c.merge("ana", List.of(cost.id()), date.id());
-      c.reorder("ana", theme.id(), 3);
+      p.codebook().change("ana", cost.id(), CodeDraft.named("Shipping cost"));
+      p.codebook().merge("ana", List.of(cost.id()), date.id());
+      p.codebook().reorder("ana", theme.id(), 3);
       for (int i = 0; i < 8; i++) {
         states.add(null);
       }
       Map<Long, TreeSet<String>> end = coding(p);
-      List<Code> endBook = c.codes();
+      List<Code> endBook = p.codebook().codes();
       for (int i = 0; i < 8; i++) {
         EditOutcome u = c.undo("ana");
         assertTrue(u.changed() > 0, u.message());
         assertEquals(0, u.skipped());
       }
       assertEquals(states.get(0), coding(p));
-      assertEquals(books.get(0), c.codes());
-      assertTrue(p.coding().rules().isEmpty());
+      assertEquals(books.get(0), p.codebook().codes());
+      assertTrue(p.rules().rules().isEmpty());
       for (int i = 0; i < 8; i++) {
         assertTrue(c.redo("ana").changed() > 0);
       }
       assertEquals(end, coding(p));
-      assertEquals(endBook, c.codes());
+      assertEquals(endBook, p.codebook().codes());
       assertEquals("Nothing to redo.", c.redo("ana").message());
     }
   }
@@ -174,7 +177,7 @@ class CodingTest {
   void aNewEditEndsTheRedoChainAndUndoIsPerCoder() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code cost = c.create("ana", CodeDraft.named("Cost"));
+      Code cost = p.codebook().create("ana", CodeDraft.named("Cost"));
       long a = p.answerIds().get(1);
       long b = p.answerIds().get(2);
       c.assign("ana", a, cost.id(), Optional.empty());
@@ -190,7 +193,7 @@ class CodingTest {
   void undoLeavesAloneWhatAnotherCoderChangedSince() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code cost = c.create("ana", CodeDraft.named("Cost"));
+      Code cost = p.codebook().create("ana", CodeDraft.named("Cost"));
       long a = p.answerIds().get(1);
       c.assign("ana", a, cost.id(), Optional.empty());
       c.assign("ben", a, cost.id(), Optional.of(new Span(0, 8)));
@@ -210,22 +213,22 @@ class CodingTest {
     long codeId;
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code date = c.create("ana", CodeDraft.named("Delivery date unclear"));
+      Code date = p.codebook().create("ana", CodeDraft.named("Delivery date unclear"));
       codeId = date.id();
-      RulePreview before = c.preview(date.id(), "\"delivery date\"", 5);
+      RulePreview before = p.rules().preview(date.id(), "\"delivery date\"", 5);
       assertEquals(2, before.matches());
       assertEquals(2, before.wouldCode());
       assertEquals(2, before.sample().size());
-      c.addRule("ana", date.id(), "\"delivery date\"");
-      EditOutcome applied = c.applyRules("ana", OptionalLong.empty());
+      p.rules().addRule("ana", date.id(), "\"delivery date\"");
+      EditOutcome applied = p.rules().applyRules("ana", OptionalLong.empty());
       assertEquals(2, applied.changed());
       removed = answer(p, "could not find");
       c.unassign("ana", removed, date.id());
-      RulePreview after = c.preview(date.id(), "\"delivery date\"", 5);
+      RulePreview after = p.rules().preview(date.id(), "\"delivery date\"", 5);
       assertEquals(1, after.alreadyCoded());
       assertEquals(1, after.keptOff());
       assertEquals(0, after.wouldCode());
-      c.applyRules("ana", OptionalLong.empty());
+      p.rules().applyRules("ana", OptionalLong.empty());
       assertFalse(coding(p).containsKey(removed), "the removal stands");
       Assignment made =
           c.assignments(List.of(answer(p, "not shown anywhere"))).values().iterator().next().get(0);
@@ -248,22 +251,30 @@ class CodingTest {
   void badCodebookChangesAreRefusedAndChangeNothing() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code delivery = c.create("ana", CodeDraft.named("Delivery"));
-      c.create("ana", CodeDraft.named("Date").withParent("Delivery").withKey("d"));
-      List<Code> book = c.codes();
-      assertMessage("already a code named", () -> c.create("ana", CodeDraft.named(" delivery ")));
-      assertMessage("needs a name", () -> c.create("ana", CodeDraft.named("  ")));
+      Code delivery = p.codebook().create("ana", CodeDraft.named("Delivery"));
+      p.codebook().create("ana", CodeDraft.named("Date").withParent("Delivery").withKey("d"));
+      List<Code> book = p.codebook().codes();
       assertMessage(
-          "two levels deep", () -> c.create("ana", CodeDraft.named("Day").withParent("Date")));
+          "already a code named", () -> p.codebook().create("ana", CodeDraft.named(" delivery ")));
+      assertMessage("needs a name", () -> p.codebook().create("ana", CodeDraft.named("  ")));
+      assertMessage(
+          "two levels deep",
+          () -> p.codebook().create("ana", CodeDraft.named("Day").withParent("Date")));
       assertMessage(
           "themes are two levels deep",
-          () -> c.change("ana", delivery.id(), CodeDraft.named("Delivery").withParent("Date")));
-      assertMessage("already belongs to", () -> c.create("ana", CodeDraft.named("X").withKey("d")));
+          () ->
+              p.codebook()
+                  .change("ana", delivery.id(), CodeDraft.named("Delivery").withParent("Date")));
       assertMessage(
-          "moves between answers", () -> c.create("ana", CodeDraft.named("X").withKey("j")));
+          "already belongs to",
+          () -> p.codebook().create("ana", CodeDraft.named("X").withKey("d")));
       assertMessage(
-          "no code named", () -> c.create("ana", CodeDraft.named("X").withParent("Nope")));
-      assertEquals(book, c.codes());
+          "moves between answers",
+          () -> p.codebook().create("ana", CodeDraft.named("X").withKey("j")));
+      assertMessage(
+          "no code named",
+          () -> p.codebook().create("ana", CodeDraft.named("X").withParent("Nope")));
+      assertEquals(book, p.codebook().codes());
     }
   }
 
@@ -271,13 +282,13 @@ class CodingTest {
   void removingACodeInUseArchivesIt() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code used = c.create("ana", CodeDraft.named("Used"));
-      Code unused = c.create("ana", CodeDraft.named("Unused"));
+      Code used = p.codebook().create("ana", CodeDraft.named("Used"));
+      Code unused = p.codebook().create("ana", CodeDraft.named("Unused"));
       c.assign("ana", p.answerIds().get(0), used.id(), Optional.empty());
-      assertTrue(c.remove("ana", used.id()).message().contains("instead of deleting"));
-      c.remove("ana", unused.id());
-      assertEquals(List.of("Used"), c.codes().stream().map(Code::name).toList());
-      assertTrue(c.codes().get(0).archived());
+      assertTrue(p.codebook().remove("ana", used.id()).message().contains("instead of deleting"));
+      p.codebook().remove("ana", unused.id());
+      assertEquals(List.of("Used"), p.codebook().codes().stream().map(Code::name).toList());
+      assertTrue(p.codebook().codes().get(0).archived());
       assertEquals(1, coding(p).size());
       assertMessage(
           "archived", () -> c.assign("ana", p.answerIds().get(1), used.id(), Optional.empty()));
@@ -297,7 +308,7 @@ class CodingTest {
   void undoingATakeOffShowsInTheSearchAtOnce() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      long late = c.create("ana", CodeDraft.named("late")).id();
+      long late = p.codebook().create("ana", CodeDraft.named("late")).id();
       long answer = p.answerIds().get(0);
       c.assign("ana", answer, late, Optional.empty());
       assertEquals(1, p.search("code:late", 10).total());

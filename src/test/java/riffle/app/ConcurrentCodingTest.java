@@ -43,8 +43,8 @@ class ConcurrentCodingTest {
     Code value;
     try (Project p = Project.openExisting(project)) {
       answers = p.answerIds();
-      looks = p.coding().create("ana", CodeDraft.named("Looks"));
-      value = p.coding().create("ana", CodeDraft.named("Value"));
+      looks = p.codebook().create("ana", CodeDraft.named("Looks"));
+      value = p.codebook().create("ana", CodeDraft.named("Value"));
     }
     CountDownLatch start = new CountDownLatch(1);
     ExecutorService pool = Executors.newFixedThreadPool(2);

@@ -62,7 +62,7 @@ class DemoFindingsTest {
       for (Theme t : SampleResponses.themes(Question.STOPPED)) {
         codes.put(
             t.code(),
-            p.coding()
+            p.codebook()
                 .create("truth", CodeDraft.named(t.code()).withDirection(Direction.FRICTION)));
       }
       for (int w = SampleResponses.WAVE_1; w <= SampleResponses.WAVE_3; w++) {

@@ -38,7 +38,7 @@ public final class HandThenRule {
       Coding coding = p.coding();
       Map<String, Long> codes = new HashMap<>();
       for (String name : List.of(UNSURE, DELIVERY, PRICE)) {
-        codes.put(name, coding.create("mila", CodeDraft.named(name)).id());
+        codes.put(name, p.codebook().create("mila", CodeDraft.named(name)).id());
       }
       Map<String, Long> answerOf = new HashMap<>();
       try (ProjectStore store = ProjectStore.openExisting(file)) {
@@ -62,9 +62,9 @@ public final class HandThenRule {
         }
       }
       // Then rules for two codes, applied to what is there.
-      coding.addRule("mila", codes.get(DELIVERY), "delivery OR arrive");
-      coding.addRule("mila", codes.get(PRICE), "price OR expensive");
-      coding.applyRules("mila", OptionalLong.empty());
+      p.rules().addRule("mila", codes.get(DELIVERY), "delivery OR arrive");
+      p.rules().addRule("mila", codes.get(PRICE), "price OR expensive");
+      p.rules().applyRules("mila", OptionalLong.empty());
     }
     // Wave 2 arrives; the saved rules run on it, nobody reads it.
     importWave(file, "wave-2.csv", "Wave 2");

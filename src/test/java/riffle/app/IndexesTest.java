@@ -47,7 +47,7 @@ class IndexesTest {
         Project b = Project.openExisting(project)) {
       assertEquals(2, a.search("delivery", 10).total());
       assertEquals(2, b.search("delivery", 10).total());
-      long late = a.coding().create("ana", CodeDraft.named("late")).id();
+      long late = a.codebook().create("ana", CodeDraft.named("late")).id();
       a.coding().assign("ana", a.answerIds().get(1), late, Optional.empty());
       assertEquals(1, b.search("code:late", 10).total(), "b catches up with a's coding");
       assertEquals(1, a.search("code:late", 10).total(), "and a reads b's commit");

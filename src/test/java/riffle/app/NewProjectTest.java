@@ -62,7 +62,7 @@ class NewProjectTest {
             NewProject.create(
                 project,
                 p -> {
-                  p.coding().create("ana", CodeDraft.named("late"));
+                  p.codebook().create("ana", CodeDraft.named("late"));
                   throw new IllegalArgumentException("stopped half way");
                 }));
     assertEquals(List.of(), names());
@@ -76,13 +76,13 @@ class NewProjectTest {
             project,
             p -> {
               try (Project other = Project.openOrCreate(project)) {
-                other.coding().create("bo", CodeDraft.named("theirs"));
+                other.codebook().create("bo", CodeDraft.named("theirs"));
               }
-              return p.coding().create("ana", CodeDraft.named("mine")).id();
+              return p.codebook().create("ana", CodeDraft.named("mine")).id();
             });
     assertTrue(made.isEmpty(), "the other process's project stays");
     try (Project p = Project.openExisting(project)) {
-      assertEquals(List.of("theirs"), p.coding().codes().stream().map(c -> c.name()).toList());
+      assertEquals(List.of("theirs"), p.codebook().codes().stream().map(c -> c.name()).toList());
     }
     assertFalse(names().stream().anyMatch(n -> n.contains(".partial")), names().toString());
   }

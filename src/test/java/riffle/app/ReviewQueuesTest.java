@@ -119,8 +119,8 @@ class ReviewQueuesTest {
           List.of(1, 2, 3, 4, 5), next.answers().stream().map(QueuePage.Item::position).toList());
       assertTrue(next.answers().get(0).answer().text().contains("(order "), "masked text shown");
 
-      Code fit = p.coding().create("ana", CodeDraft.named("Fit"));
-      Code price = p.coding().create("ana", CodeDraft.named("Price"));
+      Code fit = p.codebook().create("ana", CodeDraft.named("Fit"));
+      Code price = p.codebook().create("ana", CodeDraft.named("Price"));
       for (int i = 0; i < 3; i++) {
         p.coding().assign("ana", order[i], fit.id(), Optional.empty());
       }
@@ -129,8 +129,8 @@ class ReviewQueuesTest {
       assertTrue(three.summary().contains("the first 3 of 36"), three.summary());
 
       // A rule's code is nobody's reading: the sample is unchanged.
-      p.coding().addRule("ana", price.id(), "price");
-      p.coding().applyRules("ana", OptionalLong.of(price.id()));
+      p.rules().addRule("ana", price.id(), "price");
+      p.rules().applyRules("ana", OptionalLong.of(price.id()));
       assertEquals(three.sample(), queues.status(key).orElseThrow().sample());
 
       // An answer coded out of order (found by search, say) breaks the sample, and says how.
@@ -250,7 +250,7 @@ class ReviewQueuesTest {
       QueueKey key = QueueKey.of("Wave 1", "1");
       p.queues().start("ana", key, OptionalLong.of(7));
       long[] order = ReviewOrder.order(7, substantive(p));
-      Code fit = p.coding().create("ana", CodeDraft.named("Fit"));
+      Code fit = p.codebook().create("ana", CodeDraft.named("Fit"));
       for (int i = 0; i < 12; i++) {
         if (i % 3 == 0) {
           p.coding().assign("ana", order[i], fit.id(), Optional.empty());

@@ -57,10 +57,10 @@ class ReviewStateTest {
   void personsMarksMakeAnAnswerReadAndRulesDoNot() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code date = c.create("ana", CodeDraft.named("Delivery date unclear"));
-      Code cost = c.create("ana", CodeDraft.named("Shipping cost"));
-      c.addRule("ana", date.id(), "\"delivery date\"");
-      c.applyRules("ana", OptionalLong.empty());
+      Code date = p.codebook().create("ana", CodeDraft.named("Delivery date unclear"));
+      Code cost = p.codebook().create("ana", CodeDraft.named("Shipping cost"));
+      p.rules().addRule("ana", date.id(), "\"delivery date\"");
+      p.rules().applyRules("ana", OptionalLong.empty());
       assertEquals(Map.of(), reads(p), "codes made by a rule make nothing read");
 
       long a1 = answer(p, "not shown anywhere");
@@ -101,11 +101,11 @@ class ReviewStateTest {
   void rulesApplyCountsAnswersCodedAndCodesGivenApart() throws Exception {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
-      Code date = c.create("ana", CodeDraft.named("Delivery date unclear"));
-      Code delivery = c.create("ana", CodeDraft.named("Delivery"));
-      c.addRule("ana", date.id(), "\"delivery date\"");
-      c.addRule("ana", delivery.id(), "delivery");
-      EditOutcome out = c.applyRules("ana", OptionalLong.empty());
+      Code date = p.codebook().create("ana", CodeDraft.named("Delivery date unclear"));
+      Code delivery = p.codebook().create("ana", CodeDraft.named("Delivery"));
+      p.rules().addRule("ana", date.id(), "\"delivery date\"");
+      p.rules().addRule("ana", delivery.id(), "delivery");
+      EditOutcome out = p.rules().applyRules("ana", OptionalLong.empty());
       assertTrue(out.message().contains("2 answer(s) coded, 4 code(s) given"), out.message());
     }
   }

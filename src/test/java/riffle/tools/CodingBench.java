@@ -42,7 +42,7 @@ public final class CodingBench {
       Coding coding = p.coding();
       List<Code> codes = new ArrayList<>();
       for (int i = 0; i < 40; i++) {
-        codes.add(coding.create("bench", CodeDraft.named("Theme " + i)));
+        codes.add(p.codebook().create("bench", CodeDraft.named("Theme " + i)));
       }
       List<Long> answers = p.answerIds();
       p.search("delivery", 10);

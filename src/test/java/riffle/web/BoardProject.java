@@ -51,9 +51,9 @@ final class BoardProject {
         ImportRequest.from(new ImportSource.Paste(WAVE_2)).wave("Wave 2").get(),
         Progress.NONE);
     try (Project p = Project.openExisting(project)) {
-      for (Code c : p.coding().codes()) {
+      for (Code c : p.codebook().codes()) {
         Direction d = PRAISE.contains(c.name()) ? Direction.PRAISE : Direction.FRICTION;
-        p.coding()
+        p.codebook()
             .change(
                 "setup",
                 c.id(),

@@ -86,9 +86,9 @@ class CodingBrowserTest {
           Progress.NONE);
     }
     try (Project p = Project.openExisting(project)) {
-      Code warranty = p.coding().code("warranty doubts");
-      p.coding().addRule("setup", warranty.id(), "warranty AND question:1");
-      p.coding().applyRules("setup", OptionalLong.of(warranty.id()));
+      Code warranty = p.codebook().code("warranty doubts");
+      p.rules().addRule("setup", warranty.id(), "warranty AND question:1");
+      p.rules().applyRules("setup", OptionalLong.of(warranty.id()));
     }
     server = WebServer.start(project, WebServer.Options.defaults().webDir(Path.of("web")));
     profile = Chromium.profile();

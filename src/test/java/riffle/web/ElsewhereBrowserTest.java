@@ -79,7 +79,7 @@ class ElsewhereBrowserTest {
     assertTrue(counts.startsWith("1 wave"), counts);
 
     try (Project elsewhere = Project.openExisting(project)) {
-      long code = elsewhere.coding().create("cli", CodeDraft.named("Said elsewhere")).id();
+      long code = elsewhere.codebook().create("cli", CodeDraft.named("Said elsewhere")).id();
       long first = elsewhere.answerIds().get(0);
       elsewhere.coding().assign("cli", first, code, Optional.empty());
     }

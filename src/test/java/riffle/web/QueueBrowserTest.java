@@ -41,7 +41,7 @@ class QueueBrowserTest {
   static void start() throws Exception {
     Path project = WebServerTest.smallProject(dir);
     try (Project p = Project.openExisting(project)) {
-      p.coding()
+      p.codebook()
           .create(
               "ana",
               new CodeDraft(

@@ -33,7 +33,7 @@ final class SegmentProject {
         Progress.NONE);
     List<String> lines = Files.readAllLines(csv, StandardCharsets.UTF_8);
     try (Project p = Project.openExisting(project)) {
-      long code = p.coding().create("setup", CodeDraft.named("Delivery")).id();
+      long code = p.codebook().create("setup", CodeDraft.named("Delivery")).id();
       List<Long> ids = p.answerIds();
       for (int i = 0; i < ids.size(); i++) {
         String line = lines.get(i + 1);

@@ -53,10 +53,10 @@ public final class WorkbenchBench {
     int answers;
     try (Project p = Project.openExisting(file)) {
       answers = p.answerIds().size();
-      firstCode = p.coding().create("bench", CodeDraft.named("Theme 0").withKey("a")).id();
+      firstCode = p.codebook().create("bench", CodeDraft.named("Theme 0").withKey("a")).id();
       for (int i = 1; i < 40; i++) {
         CodeDraft d = CodeDraft.named("Theme " + i);
-        p.coding().create("bench", i < 8 ? d.withKey(Character.toString('b' + i - 1)) : d);
+        p.codebook().create("bench", i < 8 ? d.withKey(Character.toString('b' + i - 1)) : d);
       }
     }
     Path profile = Files.createTempDirectory("riffle-bench-chromium-");
