@@ -14,6 +14,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
+import riffle.words.WordList;
 
 /**
  * The word lists of the personal-data detectors, read once from {@code riffle/text/*.txt}, and the
@@ -165,8 +166,8 @@ final class PiiLexicon {
       BITS[slot] |= e.getValue();
     }
     Map<String, Integer> lengths = new HashMap<>();
-    for (Map.Entry<String, List<String>> e : readTable("iban-lengths.txt").entrySet()) {
-      lengths.put(e.getKey(), Integer.parseInt(e.getValue().get(0)));
+    for (Map.Entry<String, String> e : WordList.map("any", "iban-lengths").entrySet()) {
+      lengths.put(e.getKey(), Integer.parseInt(e.getValue()));
     }
     IBAN_LENGTHS = Map.copyOf(lengths);
   }
@@ -375,16 +376,6 @@ final class PiiLexicon {
           words.add(w.replace('’', '\''));
         }
       }
-    }
-    return out;
-  }
-
-  /** Lines "KEY value …"; "#" comments. */
-  private static Map<String, List<String>> readTable(String name) {
-    Map<String, List<String>> out = new LinkedHashMap<>();
-    for (String line : lines(name)) {
-      String[] cells = line.strip().split("\\s+");
-      out.put(cells[0], List.of(cells).subList(1, cells.length));
     }
     return out;
   }

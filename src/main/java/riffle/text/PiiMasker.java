@@ -60,10 +60,10 @@ import riffle.model.PiiType;
  *       of my debit card is 613"). Only the value is masked; the cue words stay.
  *   <dt>IBANs
  *   <dd>Two letters, two check digits and the national account number, of exactly the length the
- *       IBAN registry gives for that country ({@code iban-lengths.txt}), grouped by single spaces
- *       or hyphens or not at all, any case, ending at a group's end, whose check digits pass
- *       ISO/IEC 7064 MOD 97-10 (ISO 13616-1): {@code GB82 WEST 1234 5698 7654 32}, {@code
- *       DE89370400440532013000}. Masked whole as {@code [iban]}.
+ *       IBAN registry gives for that country ({@code riffle/words/any/iban-lengths.txt}), grouped
+ *       by single spaces or hyphens or not at all, any case, ending at a group's end, whose check
+ *       digits pass ISO/IEC 7064 MOD 97-10 (ISO 13616-1): {@code GB82 WEST 1234 5698 7654 32},
+ *       {@code DE89370400440532013000}. Masked whole as {@code [iban]}.
  *   <dt>Phone numbers
  *   <dd>A written number is digit groups joined by single spaces, hyphens or dots, with groups
  *       optionally in parentheses, optionally led by {@code +}; it must not start inside a word or
