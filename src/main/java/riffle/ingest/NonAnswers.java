@@ -3,6 +3,7 @@ package riffle.ingest;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import riffle.words.WordList;
 
 /**
  * Recognises answers that say nothing ("n/a", "-", "nothing"), which are kept but left out of the
@@ -12,54 +13,15 @@ import java.util.Set;
  * letters nor digits (spaces, punctuation, symbols, emoji) are stripped, the rest is lower-cased,
  * curly apostrophes become straight ones and runs of whitespace become one space. An answer is a
  * non-answer when nothing is left (so {@code ""}, blanks, {@code "-"}, {@code "--"}, {@code "."},
- * {@code "?"}, {@code "..."}, {@code "…"}, {@code "!!!"}) or when what is left is one of these
- * forms:
- *
- * <p>{@code n/a}, {@code na}, {@code n.a}, {@code n a}, {@code none}, {@code nothing}, {@code no},
- * {@code nil}, {@code nope}, {@code nah}, {@code null}, {@code x}, {@code xx}, {@code xxx}, {@code
- * no comment}, {@code no comments}, {@code not applicable}, {@code idk}, {@code i don't know},
- * {@code i dont know}, {@code don't know}, {@code dont know}, {@code dunno}, {@code no idea},
- * {@code not sure}, {@code none really}, {@code nothing really}, {@code nothing at all}, {@code
- * nothing else}, {@code nothing to add}, {@code nothing to say}, {@code no answer}.
+ * {@code "?"}, {@code "..."}, {@code "…"}, {@code "!!!"}) or when what is left is one of the forms
+ * listed, one a line, in {@code riffle/words/en/non-answers.txt}: "n/a", "none", "nothing", "no
+ * comment", "idk", "i don't know", "not sure", "nothing to add" and the like.
  *
  * <p>The whole answer must match: "no warranty info" and "nothing about delivery" are answers.
  * Thread-safe.
  */
 public final class NonAnswers {
-  private static final List<String> FORMS =
-      List.of(
-          "n/a",
-          "na",
-          "n.a",
-          "n a",
-          "none",
-          "nothing",
-          "no",
-          "nil",
-          "nope",
-          "nah",
-          "null",
-          "x",
-          "xx",
-          "xxx",
-          "no comment",
-          "no comments",
-          "not applicable",
-          "idk",
-          "i don't know",
-          "i dont know",
-          "don't know",
-          "dont know",
-          "dunno",
-          "no idea",
-          "not sure",
-          "none really",
-          "nothing really",
-          "nothing at all",
-          "nothing else",
-          "nothing to add",
-          "nothing to say",
-          "no answer");
+  private static final List<String> FORMS = WordList.entries("en", "non-answers");
 
   private static final Set<String> FORM_SET = Set.copyOf(FORMS);
 

@@ -59,7 +59,7 @@ final class Candidates {
   private static final int OPENS = 512;
   private static final int CLOSES = 1024;
 
-  private final Words words;
+  private final PhraseWords words;
   private final Grams grams;
   private final int maxWords;
   private final boolean create;
@@ -78,7 +78,7 @@ final class Candidates {
    * @param create true to add unseen sequences to {@code grams} (counting); false to report only
    *     sequences already there (collecting examples of known candidates)
    */
-  Candidates(Words words, Grams grams, int maxWords, boolean create) {
+  Candidates(PhraseWords words, Grams grams, int maxWords, boolean create) {
     this.words = words;
     this.grams = grams;
     this.maxWords = maxWords;
@@ -111,10 +111,10 @@ final class Candidates {
     for (int i = 0; i < n; i++) {
       Token t = tokens.get(i);
       int f = words.flags(t.text());
-      if ((f & Words.WORD) != 0 && masked(t, pii)) {
+      if ((f & PhraseWords.WORD) != 0 && masked(t, pii)) {
         f = 0;
       }
-      if ((f & Words.WORD) != 0) {
+      if ((f & PhraseWords.WORD) != 0) {
         int id = create ? words.stem(t.stem()) : words.knownStem(t.stem());
         stem[i] = id;
         if (id < 0) {
@@ -177,10 +177,10 @@ final class Candidates {
       }
       for (int k = runStart; k < Math.min(i, runStart + 3); k++) {
         int f = bits[k];
-        if ((f & Words.WORD) == 0) {
+        if ((f & PhraseWords.WORD) == 0) {
           break;
         }
-        if ((f & Words.STOP) == 0) {
+        if ((f & PhraseWords.STOP) == 0) {
           contentStart[k] = k;
           labelStart[k] = labelOfRun(tokens, runStart);
           break;
@@ -192,18 +192,18 @@ final class Candidates {
   /** The token where a negated phrase's label starts: its cue, with the auxiliary before it. */
   private int labelOfRun(List<Token> tokens, int runStart) {
     int cue = runStart - 1;
-    if (cue < 0 || (bits[cue] & Words.CUE) == 0) {
+    if (cue < 0 || (bits[cue] & PhraseWords.CUE) == 0) {
       return -1;
     }
     if (cue > 0) {
       Token c = tokens.get(cue);
       Token host = tokens.get(cue - 1);
-      String cueText = Words.normalise(c.text());
-      String hostText = Words.normalise(host.text());
+      String cueText = PhraseWords.normalise(c.text());
+      String hostText = PhraseWords.normalise(host.text());
       boolean attached = host.end() == c.start() && cueText.equals("n't");
       boolean auxiliary =
           (cueText.equals("not") || cueText.equals("never") || cueText.equals("n't"))
-              && (Words.AUXILIARIES.contains(hostText) || host.pos().equals("MD"));
+              && (PhraseWords.AUXILIARIES.contains(hostText) || host.pos().equals("MD"));
       if (attached || auxiliary) {
         return cue - 1;
       }
@@ -265,12 +265,12 @@ final class Candidates {
 
   /** A word that is no stopword (nor cue). */
   private boolean content(int i) {
-    return (bits[i] & Words.WORD) != 0 && (bits[i] & Words.STOP) == 0;
+    return (bits[i] & PhraseWords.WORD) != 0 && (bits[i] & PhraseWords.STOP) == 0;
   }
 
   private void countPairs(int n) {
     for (int i = 0; i + 1 < n; i++) {
-      if ((bits[i] & Words.WORD) != 0 && (bits[i + 1] & Words.WORD) != 0) {
+      if ((bits[i] & PhraseWords.WORD) != 0 && (bits[i + 1] & PhraseWords.WORD) != 0) {
         int a = stem[i];
         int b = stem[i + 1];
         int need = Math.max(a, b) + 1;
@@ -290,7 +290,7 @@ final class Candidates {
   private void emit(int n, int sentence, Sink sink) {
     for (int s = 0; s < n; s++) {
       int f = bits[s];
-      if ((f & Words.WORD) == 0 || (f & Words.STOP) != 0) {
+      if ((f & PhraseWords.WORD) == 0 || (f & PhraseWords.STOP) != 0) {
         continue;
       }
       boolean negated = (f & NEG) != 0;
@@ -302,7 +302,9 @@ final class Candidates {
       int limit = Math.min(n, s + maxWords);
       for (int e = s; e < limit; e++) {
         int g = bits[e];
-        if ((g & Words.WORD) == 0 || (g & Words.CUE) != 0 || ((g & NEG) != 0) != negated) {
+        if ((g & PhraseWords.WORD) == 0
+            || (g & PhraseWords.CUE) != 0
+            || ((g & NEG) != 0) != negated) {
           break;
         }
         node = create ? grams.child(node, stem[e]) : grams.find(node, stem[e]);
@@ -313,7 +315,7 @@ final class Candidates {
           if ((g & SINGLE) != 0) {
             sink.accept(node, sentence, s, e + 1, label);
           }
-        } else if ((g & Words.STOP) == 0
+        } else if ((g & PhraseWords.STOP) == 0
             ? (g & CLOSES) != 0
             : (g & PARTICLE) != 0 && (bits[e - 1] & VERB) != 0) {
           sink.accept(node, sentence, s, e + 1, label);

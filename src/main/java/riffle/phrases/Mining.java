@@ -14,7 +14,7 @@ import riffle.stats.LogLikelihood;
  */
 final class Mining {
   final PhraseSettings settings;
-  final Words words = new Words();
+  final PhraseWords words = new PhraseWords();
   final Grams grams = new Grams();
   final List<PhraseDoc> docs;
 

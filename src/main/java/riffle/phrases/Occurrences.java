@@ -28,7 +28,12 @@ final class Occurrences {
    * @param answers the answers, in the order in which they were counted
    */
   Occurrences(
-      Words words, Grams grams, int maxWords, List<PhraseDoc> answers, int[] pool, int nodes) {
+      PhraseWords words,
+      Grams grams,
+      int maxWords,
+      List<PhraseDoc> answers,
+      int[] pool,
+      int nodes) {
     this.poolIndex = new int[nodes];
     Arrays.fill(poolIndex, -1);
     for (int i = 0; i < pool.length; i++) {

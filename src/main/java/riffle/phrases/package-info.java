@@ -34,7 +34,8 @@
  *       arrive on time", "no delivery date". Its stems and its grouping leave the cue out, and it
  *       is flagged {@code negated}.
  *   <li>Stopwords are English function words, the intensifiers and fillers of survey answers, and
- *       the negation cues; the lists are in {@code Words}.
+ *       the negation cues; the lists are in {@code riffle/words/en/} and read by {@code
+ *       PhraseWords}.
  * </ul>
  *
  * <h2>Counting, grouping and labels</h2>

@@ -147,7 +147,7 @@ final class Clauses {
   }
 
   private static boolean breaksBefore(List<Token> toks, int from, int i) {
-    String w = Words.lower(toks.get(i));
+    String w = QuoteWords.lower(toks.get(i));
     if (ALWAYS_BREAK.contains(w)) {
       return true;
     }
@@ -157,11 +157,11 @@ final class Clauses {
     Token next = toks.get(i + 1);
     if (next.pos().equals("PRP")
         || next.pos().equals("EX")
-        || Words.lower(next).equals("also")
+        || QuoteWords.lower(next).equals("also")
         || i - from >= JOINED_WORDS) {
       return true;
     }
-    if (!CLAUSE_OPENERS.contains(Words.lower(next))) {
+    if (!CLAUSE_OPENERS.contains(QuoteWords.lower(next))) {
       return false;
     }
     for (int k = i + 2; k < toks.size() && k <= i + 5; k++) {
@@ -206,21 +206,21 @@ final class Clauses {
       polarity = new double[n];
       for (int i = 0; i < n; i++) {
         Token t = toks.get(i);
-        placeholder[i] = Words.isPlaceholder(t);
-        word[i] = Words.isWord(t);
+        placeholder[i] = QuoteWords.isPlaceholder(t);
+        word[i] = QuoteWords.isWord(t);
         if (!word[i] || placeholder[i]) {
           id[i] = -1;
           continue;
         }
-        String w = Words.lower(t);
+        String w = QuoteWords.lower(t);
         id[i] = vocabulary.id(t);
-        content[i] = Words.isContent(t);
+        content[i] = QuoteWords.isContent(t);
         counted[i] = !t.text().startsWith("'");
-        firstPerson[i] = Words.FIRST_PERSON.contains(w);
+        firstPerson[i] = QuoteWords.FIRST_PERSON.contains(w);
         number[i] = t.pos().equals("CD") || hasDigit(w);
         name[i] = t.pos().startsWith("NNP") && i > 0 && !w.equals("i");
-        verb[i] = t.pos().startsWith("VB") && !Words.LIGHT_VERBS.contains(w);
-        explaining[i] = Words.EXPLAINING.contains(w);
+        verb[i] = t.pos().startsWith("VB") && !QuoteWords.LIGHT_VERBS.contains(w);
+        explaining[i] = QuoteWords.EXPLAINING.contains(w);
         polarity[i] = polarity(toks, i, w, content[i]);
       }
     }
@@ -235,8 +235,8 @@ final class Clauses {
     }
     while (a < to
         && (!f.word[a]
-            || LEADING_JOINERS.contains(Words.lower(toks.get(a)))
-            || (LEADING_FILLERS.contains(Words.lower(toks.get(a))) && a + 1 < to))) {
+            || LEADING_JOINERS.contains(QuoteWords.lower(toks.get(a)))
+            || (LEADING_FILLERS.contains(QuoteWords.lower(toks.get(a))) && a + 1 < to))) {
       a++;
     }
     int b = to;
@@ -288,7 +288,7 @@ final class Clauses {
     int start = toks.get(a).start();
     int end = toks.get(b - 1).end();
     String text = masked.substring(start, end);
-    if (Words.containsPlaceholder(text) || Words.looksPersonal(text)) {
+    if (QuoteWords.containsPlaceholder(text) || QuoteWords.looksPersonal(text)) {
       return null;
     }
     double concreteness = ((number ? 1 : 0) + (name ? 1 : 0) + (verb ? 1 : 0)) / 3.0;
@@ -320,10 +320,10 @@ final class Clauses {
 
   private static double polarity(List<Token> toks, int i, String w, boolean isContent) {
     Token t = toks.get(i);
-    if (Words.POSITIVE.contains(w)) {
+    if (QuoteWords.POSITIVE.contains(w)) {
       return t.negated() ? -1 : 1;
     }
-    if (Words.NEGATIVE.contains(w)) {
+    if (QuoteWords.NEGATIVE.contains(w)) {
       return t.negated() ? 1 : -1;
     }
     if (w.equals("too") && !t.negated() && i + 1 < toks.size()) {

@@ -250,7 +250,7 @@ final class Ranking {
     int k = 0;
     for (Sentence sentence : analysis.sentences()) {
       for (Token t : sentence.tokens()) {
-        if (Words.isContent(t)) {
+        if (QuoteWords.isContent(t)) {
           ids[k++] = vocabulary.id(t);
         }
       }

@@ -60,12 +60,12 @@
  *       short enough to quote, long enough to say something; common practice for pull quotes,
  *       Riffle's choice), (n / min)² below and (max / n)² above.
  *   <li><b>D, direction</b>: the piece's polarity is the sum over its words of +1 for praise words
- *       and −1 for friction words (Riffle's own lists in {@code Words}), each flipped when negated,
- *       −1 for "too" before an adjective or adverb, and −0.5 for any other negated content word
- *       (something missing: "no delivery date"). D is 1.25 when the polarity agrees with the code's
- *       direction (positive for praise, negative for friction), 0.5 when it contradicts it, 1 when
- *       it is zero or the code is neutral. So "it was not expensive" ranks low under a price
- *       complaint.
+ *       and −1 for friction words (Riffle's own lists, read by {@code QuoteWords}), each flipped
+ *       when negated, −1 for "too" before an adjective or adverb, and −0.5 for any other negated
+ *       content word (something missing: "no delivery date"). D is 1.25 when the polarity agrees
+ *       with the code's direction (positive for praise, negative for friction), 0.5 when it
+ *       contradicts it, 1 when it is zero or the code is neutral. So "it was not expensive" ranks
+ *       low under a price complaint.
  *   <li><b>V, voice</b>: 1 when the piece speaks in the first person (I, me, my, we, us, our).
  *   <li><b>C, concreteness</b>: the share of three marks present: a number, a named thing (a proper
  *       noun other than the sentence's first word) and a specific verb (not be, have, get, make,

@@ -3,6 +3,7 @@ package riffle.text;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Set;
+import riffle.words.WordList;
 
 /**
  * Marks the tokens of a sentence that a negation governs, so that "did not arrive on time" is not
@@ -101,31 +102,29 @@ final class NegationScope {
 
   private static final Set<String> APOSTROPHE_LESS = NegationCues.APOSTROPHE_LESS;
 
-  private static final Set<String> ADDITIVE = Set.of("only", "just", "merely");
+  private static final Set<String> ADDITIVE = WordList.set("en", "negation-additive");
 
-  private static final Set<String> CLAUSE_BREAKERS =
-      Set.of("but", "although", "though", "however", "because", "whereas", "unless");
+  private static final Set<String> CLAUSE_BREAKERS = WordList.set("en", "negation-clause-breakers");
 
-  private static final Set<String> COORDINATORS = Set.of("and", "or", "&", "plus");
+  private static final Set<String> COORDINATORS = WordList.set("en", "negation-coordinators");
 
   private static final Set<String> SUBJECT_PRONOUNS =
-      Set.of("i", "you", "he", "she", "it", "we", "they", "there");
+      WordList.set("en", "negation-subject-pronouns");
 
   /** Subject pronouns that are never objects, so they always start a clause after "without". */
-  private static final Set<String> UNAMBIGUOUS_SUBJECTS = Set.of("i", "he", "she", "we", "they");
+  private static final Set<String> UNAMBIGUOUS_SUBJECTS =
+      WordList.set("en", "negation-unambiguous-subjects");
 
-  private static final Set<String> POSSESSIVES =
-      Set.of("my", "his", "her", "its", "our", "your", "their");
+  private static final Set<String> POSSESSIVES = WordList.set("en", "negation-possessives");
 
   private static final Set<String> ANSWER_FOLLOWERS =
-      Set.of("yes", "no", "ok", "okay", "thanks", "thank", "me", "him", "them", "us");
+      WordList.set("en", "negation-answer-followers");
 
   private static final Set<String> ANSWER_FOLLOWER_TAGS = Set.of("MD", "PRP", "PRP$", "EX", "UH");
 
-  private static final Set<String> WH_WORDS =
-      Set.of("which", "who", "whom", "whose", "where", "when", "what", "why", "how");
+  private static final Set<String> WH_WORDS = WordList.set("en", "negation-wh-words");
 
-  private static final Set<String> CLAUSE_ADVERBS = Set.of("then", "also", "now", "still");
+  private static final Set<String> CLAUSE_ADVERBS = WordList.set("en", "negation-clause-adverbs");
 
   private static final Set<String> FINITE_VERB_TAGS = Set.of("VBD", "VBZ", "VBP", "MD");
 

@@ -1,23 +1,20 @@
 package riffle.text;
 
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
-import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import java.util.regex.Pattern;
+import riffle.words.WordList;
 
 /**
- * The word lists of the personal-data detectors, read once from {@code riffle/text/*.txt}, and the
- * one pass over an answer that tells which detectors have anything to look at.
+ * The word lists of the personal-data detectors, read once from {@code riffle/words/any/} (the
+ * {@code pii-*.txt} lists, {@code iban-lengths.txt}), and the one pass over an answer that tells
+ * which detectors have anything to look at.
  *
  * <p>The pass reads each word (letters and marks with inner apostrophes, {@code ’} read as {@code
  * '}), lower-cases it and looks it up in one hash table of cue words. Each hit sets its family's
@@ -40,7 +37,7 @@ final class PiiLexicon {
   /** A licence-plate cue word. */
   static final int PLATE = 1 << 4;
 
-  /** A street word (see {@code street-words.txt}), also a compound such as "Hauptstraße 5". */
+  /** A street word (see {@code pii-streets-*.txt}), also a compound such as "Hauptstraße 5". */
   static final int STREET = 1 << 5;
 
   /** A PO-box word. */
@@ -89,7 +86,7 @@ final class PiiLexicon {
           Map.entry("spelled", SPELLED),
           Map.entry("at", AT));
 
-  /** Kinds of street words; see {@code street-words.txt}. */
+  /** Kinds of street words, one list each: {@code pii-streets-<kind>.txt}. */
   enum StreetKind {
     AFTER,
     WEAK,
@@ -122,23 +119,17 @@ final class PiiLexicon {
   private static final String[] SUFFIXES;
 
   static {
-    Map<String, List<String>> cues = read("cue-words.txt");
-    Map<String, List<String>> streets = read("street-words.txt");
-    Map<String, List<String>> names = read("name-words.txt");
     Map<String, Integer> bits = new HashMap<>();
-    for (Map.Entry<String, List<String>> e : cues.entrySet()) {
-      Integer family = FAMILY_NAMES.get(e.getKey());
-      if (family == null) {
-        throw new IllegalStateException("cue-words.txt: unknown family " + e.getKey());
-      }
-      for (String w : e.getValue()) {
-        bits.merge(w, family, (a, b) -> a | b);
+    for (Map.Entry<String, Integer> e : FAMILY_NAMES.entrySet()) {
+      for (String w : WordList.entries("any", "pii-cues-" + e.getKey())) {
+        bits.merge(w, e.getValue(), (a, b) -> a | b);
       }
     }
     Map<StreetKind, List<String>> byKind = new LinkedHashMap<>();
-    for (Map.Entry<String, List<String>> e : streets.entrySet()) {
-      StreetKind kind = StreetKind.valueOf(e.getKey().toUpperCase(Locale.ROOT));
-      List<String> words = new ArrayList<>(e.getValue());
+    for (StreetKind kind : StreetKind.values()) {
+      List<String> words =
+          new ArrayList<>(
+              WordList.entries("any", "pii-streets-" + kind.name().toLowerCase(Locale.ROOT)));
       words.sort(Comparator.comparingInt(String::length).reversed());
       byKind.put(kind, List.copyOf(words));
       if (kind != StreetKind.SUFFIX) {
@@ -149,9 +140,9 @@ final class PiiLexicon {
     }
     STREETS = Map.copyOf(byKind);
     SUFFIXES = byKind.get(StreetKind.SUFFIX).toArray(String[]::new);
-    NOT_NAMES = Set.copyOf(names.get("not"));
-    PARTICLES = Set.copyOf(names.get("particle"));
-    TITLES = Set.copyOf(names.get("title"));
+    NOT_NAMES = WordList.set("any", "pii-not-names");
+    PARTICLES = WordList.set("any", "pii-name-particles");
+    TITLES = WordList.set("any", "pii-name-titles");
     int size = Integer.highestOneBit(bits.size() * 4);
     KEYS = new long[size];
     BITS = new int[size];
@@ -165,8 +156,8 @@ final class PiiLexicon {
       BITS[slot] |= e.getValue();
     }
     Map<String, Integer> lengths = new HashMap<>();
-    for (Map.Entry<String, List<String>> e : readTable("iban-lengths.txt").entrySet()) {
-      lengths.put(e.getKey(), Integer.parseInt(e.getValue().get(0)));
+    for (Map.Entry<String, String> e : WordList.map("any", "iban-lengths").entrySet()) {
+      lengths.put(e.getKey(), Integer.parseInt(e.getValue()));
     }
     IBAN_LENGTHS = Map.copyOf(lengths);
   }
@@ -355,56 +346,5 @@ final class PiiLexicon {
   /** Whether {@code lowerWord} is a street word of {@code kind}. */
   static boolean isStreet(StreetKind kind, String lowerWord) {
     return STREETS.get(kind).contains(lowerWord);
-  }
-
-  // ---- reading the files ----
-
-  /** Lines "kind: word word …" (several lines per kind allowed); "#" comments. */
-  private static Map<String, List<String>> read(String name) {
-    Map<String, List<String>> out = new LinkedHashMap<>();
-    for (String line : lines(name)) {
-      int colon = line.indexOf(':');
-      if (colon < 0) {
-        throw new IllegalStateException(name + ": a line without 'kind:': " + line);
-      }
-      String kind = line.substring(0, colon).strip();
-      List<String> words = out.computeIfAbsent(kind, k -> new ArrayList<>());
-      Set<String> seen = new HashSet<>(words);
-      for (String w : line.substring(colon + 1).strip().split("\\s+")) {
-        if (!w.isEmpty() && seen.add(w)) {
-          words.add(w.replace('’', '\''));
-        }
-      }
-    }
-    return out;
-  }
-
-  /** Lines "KEY value …"; "#" comments. */
-  private static Map<String, List<String>> readTable(String name) {
-    Map<String, List<String>> out = new LinkedHashMap<>();
-    for (String line : lines(name)) {
-      String[] cells = line.strip().split("\\s+");
-      out.put(cells[0], List.of(cells).subList(1, cells.length));
-    }
-    return out;
-  }
-
-  private static List<String> lines(String name) {
-    try (InputStream in = PiiLexicon.class.getResourceAsStream(name)) {
-      if (in == null) {
-        throw new IllegalStateException(
-            "the word list riffle/text/" + name + " is missing from this build");
-      }
-      List<String> out = new ArrayList<>();
-      for (String line : new String(in.readAllBytes(), StandardCharsets.UTF_8).split("\n")) {
-        String l = line.strip();
-        if (!l.isEmpty() && !l.startsWith("#")) {
-          out.add(l);
-        }
-      }
-      return out;
-    } catch (IOException e) {
-      throw new UncheckedIOException("the word list riffle/text/" + name + " cannot be read", e);
-    }
   }
 }

@@ -15,7 +15,7 @@ import riffle.model.PiiType;
  * {@code [name]}, {@code [address]}, {@code [postcode]}, {@code [dob]}, {@code [iban]}, {@code
  * [id]}, {@code [ip]}, {@code [mac]}, {@code [plate]}); every other character is kept exactly as
  * written. Immutable and safe to share between threads; patterns are compiled once, word lists
- * ({@code riffle/text/*.txt}) read once.
+ * ({@code riffle/words/any/}) read once.
  *
  * <h2>What is masked</h2>
  *
@@ -60,10 +60,10 @@ import riffle.model.PiiType;
  *       of my debit card is 613"). Only the value is masked; the cue words stay.
  *   <dt>IBANs
  *   <dd>Two letters, two check digits and the national account number, of exactly the length the
- *       IBAN registry gives for that country ({@code iban-lengths.txt}), grouped by single spaces
- *       or hyphens or not at all, any case, ending at a group's end, whose check digits pass
- *       ISO/IEC 7064 MOD 97-10 (ISO 13616-1): {@code GB82 WEST 1234 5698 7654 32}, {@code
- *       DE89370400440532013000}. Masked whole as {@code [iban]}.
+ *       IBAN registry gives for that country ({@code riffle/words/any/iban-lengths.txt}), grouped
+ *       by single spaces or hyphens or not at all, any case, ending at a group's end, whose check
+ *       digits pass ISO/IEC 7064 MOD 97-10 (ISO 13616-1): {@code GB82 WEST 1234 5698 7654 32},
+ *       {@code DE89370400440532013000}. Masked whole as {@code [iban]}.
  *   <dt>Phone numbers
  *   <dd>A written number is digit groups joined by single spaces, hyphens or dots, with groups
  *       optionally in parentheses, optionally led by {@code +}; it must not start inside a word or
@@ -125,7 +125,7 @@ import riffle.model.PiiType;
  *       word is letters and marks with inner apostrophes or hyphens (O'Neill, Anne-Marie, McTavish)
  *       or an initial ("P."), with particles between (van, von, de, da, der, la …: "Sanne van der
  *       Velde"); a title before the name stays readable ("Regards, Mr [name]"); a possessive "'s"
- *       is kept out of the mask. Words in {@code name-words.txt} ("Amazing", "Happy", "Help",
+ *       is kept out of the mask. Words in {@code pii-not-names.txt} ("Amazing", "Happy", "Help",
  *       "the", weekdays, months, shop words…) are never taken as names.
  *       <ul>
  *         <li>"my name is X", "my name's X", "name: X", "full name: X", and "ich heiße", "je
@@ -156,21 +156,21 @@ import riffle.model.PiiType;
  *       </ul>
  *   <dt>Street addresses
  *   <dd>A house number (221B, 12-14) and one to four capitalised words ending in a street word of
- *       {@code street-words.txt} (Street, St, Road, Rd, Avenue, Lane, Boulevard, Crescent, Terrace,
- *       Gardens, Mews …: "14 Larkmead Road"); a street word that is also an ordinary word (Way,
- *       Close, Court, Place, Square, Drive, Park …) counts only with a town, postcode or flat after
- *       it or an address cue before it. Other languages: the street word first and the number after
- *       ("Via Gelsomini 18", "Calle Almendros 23", "C/ Mayor 5"), the number first and the street
- *       word after ("12 rue des Glycines", "5 bis avenue Marcel Dorval"), or a compound and its
- *       number ("Hauptstr. 112", "Kastanjelaan 41", "Storgatan 3"). After an address cue ("I live
- *       at", "my address is", "deliver to", "ship to", "moved to" …) the words may be lower case
- *       ("6 orchard mews"). The whole span is one {@code [address]}: a flat or unit before or after
- *       ("Flat 3, …", "…, Apt 12C"), a direction ("NW"), then the postcode and town (continental
- *       order) or the town, region and postcode (English order), then the country. PO boxes ("PO
- *       Box 4471", "Postfach 10 11 22", "Apartado de correos 27") likewise. A street found once is
- *       an address again wherever else a house number stands before it. Not an address: a street
- *       word followed by a common noun ("2 Gravel Road bikes"), a compound followed by a year
- *       ("Frühlingsweg 2026").
+ *       {@code pii-streets-*.txt} (Street, St, Road, Rd, Avenue, Lane, Boulevard, Crescent,
+ *       Terrace, Gardens, Mews …: "14 Larkmead Road"); a street word that is also an ordinary word
+ *       (Way, Close, Court, Place, Square, Drive, Park …) counts only with a town, postcode or flat
+ *       after it or an address cue before it. Other languages: the street word first and the number
+ *       after ("Via Gelsomini 18", "Calle Almendros 23", "C/ Mayor 5"), the number first and the
+ *       street word after ("12 rue des Glycines", "5 bis avenue Marcel Dorval"), or a compound and
+ *       its number ("Hauptstr. 112", "Kastanjelaan 41", "Storgatan 3"). After an address cue ("I
+ *       live at", "my address is", "deliver to", "ship to", "moved to" …) the words may be lower
+ *       case ("6 orchard mews"). The whole span is one {@code [address]}: a flat or unit before or
+ *       after ("Flat 3, …", "…, Apt 12C"), a direction ("NW"), then the postcode and town
+ *       (continental order) or the town, region and postcode (English order), then the country. PO
+ *       boxes ("PO Box 4471", "Postfach 10 11 22", "Apartado de correos 27") likewise. A street
+ *       found once is an address again wherever else a house number stands before it. Not an
+ *       address: a street word followed by a common noun ("2 Gravel Road bikes"), a compound
+ *       followed by a year ("Frühlingsweg 2026").
  *   <dt>Postcodes
  *   <dd>Outside an address: after a cue ("postcode", "post code", "zip", "zip code", "PLZ", "postal
  *       code", "code postal", "código postal", "CAP"), any postcode shape; after a US state (itself
@@ -263,12 +263,12 @@ import riffle.model.PiiType;
  *
  * One pass over the characters notes digits, {@code @}, slashes, dots, colons, hyphens, line breaks
  * and capitals; one pass over the words looks each up in one hash table of cue words ({@code
- * cue-words.txt}, {@code street-words.txt}). Detectors run only when their characters or cue words
- * are there: without a digit only e-mail addresses, web addresses, handles and names are looked
- * for. The tagger runs only for a capitalised candidate after a name cue, on the sentence around it
- * (at most 24 parses per answer; identical stretches are parsed once per process). The built-in
- * patterns use possessive quantifiers, bounded repetition and no unbounded repeated groups (which
- * the JDK's engine would recurse on), and phones, cards, IBANs, IP and MAC addresses, e-mail
+ * pii-cues-*.txt}, {@code pii-streets-*.txt}). Detectors run only when their characters or cue
+ * words are there: without a digit only e-mail addresses, web addresses, handles and names are
+ * looked for. The tagger runs only for a capitalised candidate after a name cue, on the sentence
+ * around it (at most 24 parses per answer; identical stretches are parsed once per process). The
+ * built-in patterns use possessive quantifiers, bounded repetition and no unbounded repeated groups
+ * (which the JDK's engine would recurse on), and phones, cards, IBANs, IP and MAC addresses, e-mail
  * addresses and handles are found by linear scans: answers of 20,000 repeated digits, {@code @}s,
  * dots or cue phrases take milliseconds. {@code riffle.text.MaskBench} times this against an older
  * build.

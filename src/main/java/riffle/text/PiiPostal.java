@@ -9,7 +9,8 @@ import riffle.model.PiiType;
 /**
  * Finds postal addresses (house number and street, PO boxes, with what follows: flat, town, region,
  * postcode, country) and postcodes standing on their own. The rules and their sources are
- * documented on {@link PiiMasker}; the street words are in {@code street-words.txt}.
+ * documented on {@link PiiMasker}; the street words are in {@code
+ * riffle/words/any/pii-streets-*.txt}.
  *
  * <p>Postcode shapes (written from memory of each operator's published format, not copied from it):
  * Royal Mail's PAF (UK: outward code A9, A99, AA9, AA99, A9A or AA9A, a space, inward code 9AA,

@@ -1,8 +1,11 @@
 package riffle.ingest;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.List;
+import java.util.Locale;
 import org.junit.jupiter.api.Test;
 
 class NonAnswersTest {
@@ -77,6 +80,18 @@ class NonAnswersTest {
     };
     for (String a : answers) {
       assertFalse(NonAnswers.isNonAnswer(a), "expected a real answer: [" + a + "]");
+    }
+  }
+
+  @Test
+  void theFormsLoadFromTheirFileAsTheyAreCompared() {
+    List<String> forms = NonAnswers.forms();
+    assertEquals(32, forms.size(), "as many forms as the list had in Java");
+    assertEquals(List.of("n/a", "na", "n.a"), forms.subList(0, 3));
+    assertTrue(forms.containsAll(List.of("i don't know", "no comment", "no answer")));
+    for (String form : forms) {
+      assertEquals(form.strip().toLowerCase(Locale.ROOT).replaceAll("\\s+", " "), form, form);
+      assertFalse(form.contains("\u2019"), form);
     }
   }
 }

@@ -70,7 +70,7 @@ class DemoQuotesTest {
     Set<String> out = new HashSet<>();
     for (Sentence s : a.sentences()) {
       for (Token t : s.tokens()) {
-        if (Words.isContent(t)) {
+        if (QuoteWords.isContent(t)) {
           out.add(t.stem());
         }
       }

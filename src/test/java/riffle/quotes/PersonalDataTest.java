@@ -76,7 +76,7 @@ class PersonalDataTest {
         assertFalse(lower.contains(secret.toLowerCase(Locale.ROOT)), secret + " in: " + text);
       }
       assertFalse(text.contains("["), "a placeholder in: " + text);
-      assertFalse(Words.looksPersonal(text.replace(CopyBoard.CONSENT_NOTICE, "")), text);
+      assertFalse(QuoteWords.looksPersonal(text.replace(CopyBoard.CONSENT_NOTICE, "")), text);
     }
     for (Quote q : all) {
       assertTrue(answers.list.get((int) q.answerId() - 1).analysis().masked().contains(q.text()));
@@ -85,10 +85,10 @@ class PersonalDataTest {
 
   @Test
   void numbersAndAddressesTheMasksMissAreRecognised() {
-    assertTrue(Words.looksPersonal("call 555 0100 222"));
-    assertTrue(Words.looksPersonal("ref 88123456"));
-    assertTrue(Words.looksPersonal("write to someone@somewhere"));
-    assertFalse(Words.looksPersonal("it cost 1,299 and came in 3-5 days"));
-    assertFalse(Words.looksPersonal("from 2019 to 2024"));
+    assertTrue(QuoteWords.looksPersonal("call 555 0100 222"));
+    assertTrue(QuoteWords.looksPersonal("ref 88123456"));
+    assertTrue(QuoteWords.looksPersonal("write to someone@somewhere"));
+    assertFalse(QuoteWords.looksPersonal("it cost 1,299 and came in 3-5 days"));
+    assertFalse(QuoteWords.looksPersonal("from 2019 to 2024"));
   }
 }
