@@ -144,14 +144,14 @@ public final class AnswerBrowser {
       String wave = query.wave().get();
       boolean known = store.waveNames().contains(wave);
       if (!known) {
-        throw new IllegalArgumentException("there is no wave \"" + wave + "\" in this project");
+        throw new InputException("there is no wave \"" + wave + "\" in this project");
       }
       parts.add("wave:" + quoted(wave));
     }
     if (query.question().isPresent()) {
       int n = query.question().getAsInt();
       if (n < 1 || n > questions.size()) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "there is no question " + n + "; the project has " + questions.size());
       }
       parts.add("question:" + n);

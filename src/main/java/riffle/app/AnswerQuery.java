@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.OptionalLong;
 import riffle.model.ControlChars;
+import riffle.model.InputException;
 
 /**
  * Which answers to list for coding, and which page of them.
@@ -42,10 +43,10 @@ public record AnswerQuery(
     segments = Collections.unmodifiableMap(new LinkedHashMap<>(segments));
     segments.keySet().forEach(k -> ControlChars.checkName("the segment column", k));
     if (offset < 0) {
-      throw new IllegalArgumentException("offset must be 0 or more, not " + offset);
+      throw new InputException("offset must be 0 or more, not " + offset);
     }
     if (limit < 1 || limit > MAX_LIMIT) {
-      throw new IllegalArgumentException("limit must be from 1 to " + MAX_LIMIT + ", not " + limit);
+      throw new InputException("limit must be from 1 to " + MAX_LIMIT + ", not " + limit);
     }
   }
 

@@ -30,8 +30,6 @@ final class AnswerSearch implements AutoCloseable {
   SearchResult search(String query, int limit) throws InputException {
     try {
       return index().search(query, store.questions(), limit);
-    } catch (InputException e) {
-      throw e;
     } catch (IOException e) {
       throw unreadable(e);
     }
@@ -41,8 +39,6 @@ final class AnswerSearch implements AutoCloseable {
   SearchResult similar(long answerId, int limit) throws InputException {
     try {
       return index().similar(answerId, limit);
-    } catch (InputException e) {
-      throw e;
     } catch (IOException e) {
       throw unreadable(e);
     }
@@ -61,8 +57,6 @@ final class AnswerSearch implements AutoCloseable {
   long[] matches(String query, List<String> questions) throws InputException {
     try {
       return index().matches(query, questions);
-    } catch (InputException e) {
-      throw e;
     } catch (IOException e) {
       throw unreadable(e);
     }

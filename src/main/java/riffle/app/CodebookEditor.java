@@ -83,7 +83,7 @@ public final class CodebookEditor {
           Code before = Codebook.byId(book, codeId);
           if (changes.parent().filter(p -> !p.isBlank()).isPresent()
               && !Codebook.children(book, codeId).isEmpty()) {
-            throw new IllegalArgumentException(
+            throw new InputException(
                 "\""
                     + before.name()
                     + "\" is a theme with codes under it; themes are two levels deep, so move"
@@ -207,7 +207,7 @@ public final class CodebookEditor {
             }
             Code source = Codebook.byId(book, sourceId);
             if (target.parent().isPresent() && target.parent().getAsLong() == sourceId) {
-              throw new IllegalArgumentException(
+              throw new InputException(
                   "\""
                       + target.name()
                       + "\" is under \""
@@ -216,7 +216,7 @@ public final class CodebookEditor {
             }
             List<Code> children = Codebook.children(book, sourceId);
             if (!children.isEmpty() && target.parent().isPresent()) {
-              throw new IllegalArgumentException(
+              throw new InputException(
                   "\""
                       + source.name()
                       + "\" has codes under it and \""
@@ -251,7 +251,7 @@ public final class CodebookEditor {
             names.add("\"" + source.name() + "\"");
           }
           if (names.isEmpty()) {
-            throw new IllegalArgumentException("name at least one code to merge into another");
+            throw new InputException("name at least one code to merge into another");
           }
           e.putCode(Codebook.byId(e.codes(), targetId).withExamples(List.copyOf(examples)));
           e.note("into", target.name());

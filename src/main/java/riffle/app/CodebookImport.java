@@ -72,7 +72,7 @@ final class CodebookImport {
                       changed += pass == 0 ? 1 : 0;
                     }
                   }
-                } catch (IllegalArgumentException bad) {
+                } catch (InputException bad) {
                   failed[0] =
                       new InputException(new InputProblem(source, r.line(), 0, bad.getMessage()));
                   throw bad;
@@ -88,7 +88,7 @@ final class CodebookImport {
                 + changed
                 + " changed.";
           });
-    } catch (IllegalArgumentException bad) {
+    } catch (InputException bad) {
       if (failed[0] != null) {
         throw failed[0];
       }

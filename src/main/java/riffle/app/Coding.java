@@ -65,7 +65,7 @@ public final class Coding {
           Code c = usable(e, codeId);
           String text = answerText(e, answerId);
           if (span.isPresent() && span.get().end() > text.length()) {
-            throw new IllegalArgumentException(
+            throw new InputException(
                 "span "
                     + span.get().start()
                     + ".."
@@ -105,7 +105,7 @@ public final class Coding {
   public EditOutcome acceptAbove(String coder, List<ShownSuggestion> suggestions, double above)
       throws InputException {
     if (!(above > 0 && above <= 1)) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "accept suggestions above a confidence between 0 and 1, not " + above);
     }
     return store.edit(
@@ -220,7 +220,7 @@ public final class Coding {
   static Code usable(CodingEdit e, long codeId) throws ProjectFileException {
     Code c = Codebook.byId(e.codes(), codeId);
     if (c.archived()) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "\"" + c.name() + "\" is archived; bring it back before coding with it");
     }
     return c;
@@ -228,6 +228,6 @@ public final class Coding {
 
   static String answerText(CodingEdit e, long answerId) throws ProjectFileException {
     return e.maskedText(answerId)
-        .orElseThrow(() -> new IllegalArgumentException("no answer with id " + answerId));
+        .orElseThrow(() -> new InputException("no answer with id " + answerId));
   }
 }

@@ -76,7 +76,7 @@ public final class CodingRules {
               e.rules().stream()
                   .filter(x -> x.id() == ruleId)
                   .findFirst()
-                  .orElseThrow(() -> new IllegalArgumentException("no rule with id " + ruleId));
+                  .orElseThrow(() -> new InputException("no rule with id " + ruleId));
           e.removeRule(ruleId);
           return "Deleted the rule " + r.query() + ".";
         });
@@ -202,7 +202,7 @@ public final class CodingRules {
   public EditOutcome assignAll(String coder, long codeId, String query) throws InputException {
     String q = query.strip();
     if (q.isEmpty()) {
-      throw new IllegalArgumentException("write the query whose answers should get the code");
+      throw new InputException("write the query whose answers should get the code");
     }
     long[] found = search.matches(q);
     return store.edit(

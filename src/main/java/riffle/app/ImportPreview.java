@@ -69,7 +69,7 @@ public record ImportPreview(
    */
   public static ImportPreview of(ImportRequest request, int maxRows) throws InputException {
     if (maxRows < 1 || maxRows > 1_000) {
-      throw new IllegalArgumentException("rows must be between 1 and 1000, not " + maxRows);
+      throw new InputException("rows must be between 1 and 1000, not " + maxRows);
     }
     SurveyTable table = WaveImporter.read(request, Progress.NONE);
     PiiMasker masker = PiiMasker.standard();

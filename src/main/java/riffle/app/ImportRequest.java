@@ -10,6 +10,8 @@ import riffle.ingest.Delimiter;
 import riffle.ingest.ImportSettings;
 import riffle.model.ColumnRole;
 import riffle.model.ControlChars;
+import riffle.model.InputException;
+import riffle.model.SettingException;
 
 /**
  * One import: what to read, into which wave, and how to read it. Built by {@link #from}; the
@@ -112,8 +114,8 @@ public final class ImportRequest {
     /** Refuse exports larger than this many MiB. */
     public Builder maxMegabytes(long megabytes) {
       if (megabytes <= 0 || megabytes > 1L << 20) {
-        throw new IllegalArgumentException(
-            "--max-mb must be between 1 and " + (1L << 20) + ", not " + megabytes);
+        throw new SettingException(
+            "max size", "the max size must be from 1 to " + (1L << 20) + " MiB, not " + megabytes);
       }
       settings.maxBytes(megabytes << 20);
       return this;
@@ -176,7 +178,7 @@ public final class ImportRequest {
       if (role == ColumnRole.ID || role == ColumnRole.DATE || role == ColumnRole.CODER) {
         String earlier = singles.putIfAbsent(role, header);
         if (earlier != null) {
-          throw new IllegalArgumentException(
+          throw new InputException(
               "only one column can be the "
                   + role.name().toLowerCase(Locale.ROOT)
                   + " column, but both '"

@@ -53,7 +53,7 @@ final class Indexes {
     try {
       catchUp(store, index);
       return index;
-    } catch (ProjectFileException | RuntimeException e) {
+    } catch (RuntimeException e) {
       index.close();
       throw e;
     }
@@ -82,8 +82,6 @@ final class Indexes {
       try (AnswerIndex.Writer writer = lock(store, index, waitMillis)) {
         write(store, writer);
       }
-    } catch (ProjectFileException e) {
-      throw e;
     } catch (IOException e) {
       throw cannot(store, e);
     }
@@ -143,8 +141,6 @@ final class Indexes {
       BatchOutcome outcome = work.run();
       write(store, writer);
       return outcome;
-    } catch (InputException e) {
-      throw e;
     } catch (IOException e) {
       throw cannot(store, e);
     } finally {
@@ -224,8 +220,6 @@ final class Indexes {
   private static AnswerIndex open(ProjectStore store) throws ProjectFileException {
     try {
       return AnswerIndex.open(folder(store.file()));
-    } catch (ProjectFileException e) {
-      throw e;
     } catch (IOException e) {
       throw cannot(store, e);
     }

@@ -2,7 +2,6 @@ package riffle.app;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import riffle.model.Analysis;
@@ -23,10 +22,10 @@ final class PhraseMining {
 
   static PhraseFindings run(ProjectStore store, PhraseQuery q) throws ProjectFileException {
     List<String> waves = store.waveNames();
-    Optional<String> wave = q.wave().map(w -> known(w, waves, "--wave"));
-    Optional<String> against = q.against().map(w -> known(w, waves, "--against"));
+    Optional<String> wave = q.wave().map(w -> Lookups.wave(w, waves, "wave"));
+    Optional<String> against = q.against().map(w -> Lookups.wave(w, waves, "against"));
     List<String> questions = store.questions();
-    Optional<String> question = q.question().map(x -> question(x, questions));
+    Optional<String> question = q.question().map(x -> Lookups.question(x, questions));
 
     PhraseFilter focus = PhraseFilter.all();
     if (wave.isPresent()) {
@@ -81,41 +80,5 @@ final class PhraseMining {
         .storedAnalysis(answerId)
         .orElseThrow(() -> new IllegalStateException("answer " + answerId + " vanished"))
         .normalized();
-  }
-
-  static String known(String wave, List<String> waves, String option) {
-    for (String w : waves) {
-      if (w.equalsIgnoreCase(wave.strip())) {
-        return w;
-      }
-    }
-    throw new IllegalArgumentException(
-        "no wave named \""
-            + wave
-            + "\" ("
-            + option
-            + "); the waves are "
-            + String.join(", ", waves));
-  }
-
-  static String question(String given, List<String> questions) {
-    String q = given.strip();
-    if (q.matches("\\d+")) {
-      int n = Integer.parseInt(q);
-      if (n >= 1 && n <= questions.size()) {
-        return questions.get(n - 1);
-      }
-    }
-    for (String text : questions) {
-      if (text.toLowerCase(Locale.ROOT).equals(q.toLowerCase(Locale.ROOT))) {
-        return text;
-      }
-    }
-    StringBuilder list = new StringBuilder();
-    for (int i = 0; i < questions.size(); i++) {
-      list.append(i == 0 ? "" : "; ").append(i + 1).append(" = ").append(questions.get(i));
-    }
-    throw new IllegalArgumentException(
-        "no question \"" + given + "\" (--question); give its number or text: " + list);
   }
 }

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
 import riffle.model.ControlChars;
+import riffle.model.SettingException;
 
 /**
  * What to mine: which answers, and optionally a wave to compare with.
@@ -25,10 +26,11 @@ public record PhraseQuery(
     segments = Collections.unmodifiableMap(new LinkedHashMap<>(segments));
     segments.keySet().forEach(k -> ControlChars.checkName("the segment column", k));
     if (limit < 1 || limit > 10_000) {
-      throw new IllegalArgumentException("--limit must be between 1 and 10000, not " + limit);
+      throw new SettingException("limit", "the limit must be from 1 to 10000, not " + limit);
     }
     if (against.isPresent() && wave.isEmpty()) {
-      throw new IllegalArgumentException("--against needs --wave: the wave to compare with it");
+      throw new SettingException(
+          "against", "a comparison needs a wave to compare with the wave it names");
     }
   }
 }

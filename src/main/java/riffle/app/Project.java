@@ -56,7 +56,7 @@ public final class Project implements AutoCloseable {
       Analyses.refresh(p.store, Progress.NONE);
       p.notices = List.copyOf(p.quotes().recheckBoard());
       return p;
-    } catch (InputException | RuntimeException e) {
+    } catch (RuntimeException e) {
       p.close();
       throw e;
     }
@@ -219,7 +219,7 @@ public final class Project implements AutoCloseable {
   public SuggestionReport suggest(Optional<String> wave) throws InputException {
     List<String> waves = new java.util.ArrayList<>();
     if (wave.isPresent()) {
-      waves.add(PhraseMining.known(wave.get(), store.waveNames(), "--wave"));
+      waves.add(Lookups.wave(wave.get(), store.waveNames(), "wave"));
     }
     Suggestions.Trained trained =
         Suggestions.train(store, riffle.coding.SuggestSettings.defaults());

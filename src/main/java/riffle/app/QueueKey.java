@@ -2,6 +2,7 @@ package riffle.app;
 
 import java.util.Objects;
 import java.util.Optional;
+import riffle.model.InputException;
 
 /**
  * Which review queue: one wave and question, and optionally one value of a segment column.
@@ -21,7 +22,7 @@ public record QueueKey(
     segmentColumn = segmentColumn.map(String::strip).filter(s -> !s.isEmpty());
     segmentValue = segmentValue.map(String::strip).filter(s -> !s.isEmpty());
     if (segmentColumn.isPresent() != segmentValue.isPresent()) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "a segment is COLUMN=VALUE, such as device=mobile: give both the column and the value");
     }
   }
@@ -44,8 +45,7 @@ public record QueueKey(
     }
     int eq = s.indexOf('=');
     if (eq <= 0 || eq == s.length() - 1) {
-      throw new IllegalArgumentException(
-          "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
+      throw new InputException("a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
     }
     return new QueueKey(
         wave, question, Optional.of(s.substring(0, eq)), Optional.of(s.substring(eq + 1)));

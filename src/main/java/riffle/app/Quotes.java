@@ -49,7 +49,7 @@ public final class Quotes {
       settings.latestWave(waves.get(waves.size() - 1));
     }
     if (query.wave().isPresent()) {
-      settings.waves(Set.of(PhraseMining.known(query.wave().get(), waves, "--wave")));
+      settings.waves(Set.of(Lookups.wave(query.wave().get(), waves, "wave")));
     }
     if (!query.segments().isEmpty()) {
       settings.segments(query.segments());
@@ -192,10 +192,10 @@ public final class Quotes {
         e -> {
           String masked =
               e.maskedText(answerId)
-                  .orElseThrow(() -> new IllegalArgumentException("no answer with id " + answerId));
+                  .orElseThrow(() -> new InputException("no answer with id " + answerId));
           String quote = text.strip();
           if (quote.isEmpty() || !masked.contains(quote)) {
-            throw new IllegalArgumentException(
+            throw new InputException(
                 "a quote must be the answer's own words as written (masked); answer "
                     + answerId
                     + " does not contain \""
@@ -280,8 +280,7 @@ public final class Quotes {
       case "txt" -> BoardExport.plainText(board);
       case "csv" -> BoardExport.csv(board);
       default ->
-          throw new IllegalArgumentException(
-              "the copy board is written as md, txt or csv, not " + format);
+          throw new InputException("the copy board is written as md, txt or csv, not " + format);
     };
   }
 
@@ -297,7 +296,7 @@ public final class Quotes {
 
   private static int check(List<BoardRow> items, int index, QuoteSlot slot) {
     if (index < 0 || index >= items.size()) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           BoardExport.heading(slot)
               + " has "
               + items.size()

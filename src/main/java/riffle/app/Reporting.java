@@ -50,7 +50,7 @@ public final class Reporting {
 
   private Loaded load(Optional<String> question) throws InputException {
     List<String> questions = store.questions();
-    Optional<String> only = question.map(q -> PhraseMining.question(q, questions));
+    Optional<String> only = question.map(q -> Lookups.question(q, questions));
     List<String> waves = store.waveNames();
     List<ProjectStore.AnswerRow> rows = store.answerRows(List.of(), only);
     List<Long> ids = new ArrayList<>(rows.size());
@@ -84,7 +84,7 @@ public final class Reporting {
   public List<SegmentColumn> segments(Optional<String> question, Optional<String> wave)
       throws InputException {
     Loaded l = load(question);
-    Optional<String> only = wave.map(w -> PhraseMining.known(w, l.waves, "wave"));
+    Optional<String> only = wave.map(w -> Lookups.wave(w, l.waves, "wave"));
     Set<String> columns = new TreeSet<>();
     for (ProjectStore.AnswerRow r : l.rows) {
       if (only.isEmpty() || only.get().equals(r.wave())) {
@@ -142,8 +142,8 @@ public final class Reporting {
       settings =
           new ReportSettings(
               settings.segment(),
-              query.from().map(w -> PhraseMining.known(w, l.waves, "--from")),
-              query.to().map(w -> PhraseMining.known(w, l.waves, "--to")),
+              query.from().map(w -> Lookups.wave(w, l.waves, "from")),
+              query.to().map(w -> Lookups.wave(w, l.waves, "to")),
               false);
     }
     List<ReportAnswer> answers = new ArrayList<>(l.rows.size());

@@ -56,7 +56,7 @@ public final class ReviewQueues {
    */
   public QueueStatus start(String coder, QueueKey key, OptionalLong seed) throws InputException {
     if (seed.isPresent() && (seed.getAsLong() < 0 || seed.getAsLong() > ReviewQueue.MAX_SEED)) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "a seed is a whole number from 0 to "
               + ReviewQueue.MAX_SEED
               + ", not "
@@ -65,15 +65,14 @@ public final class ReviewQueues {
     Resolved r = resolve(key);
     List<Long> answers = store.queueAnswers(r.wave, r.question, r.column, r.value);
     if (answers.isEmpty()) {
-      throw new IllegalArgumentException(
-          "there is no substantive answer to order for " + r.describe());
+      throw new InputException("there is no substantive answer to order for " + r.describe());
     }
     long chosen = seed.orElseGet(ReviewQueues::clockSeed);
     ProjectStore.QueueStart started =
         store.startQueue(r.wave, r.question, r.column, r.value, chosen, coder);
     ReviewQueue q = started.queue();
     if (!started.created() && seed.isPresent() && q.seed() != seed.getAsLong()) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "the random order of "
               + r.describe()
               + " was started by "
@@ -137,7 +136,7 @@ public final class ReviewQueues {
       throws InputException {
     checkLimit(limit);
     if (offset.isPresent() && offset.getAsInt() < 0) {
-      throw new IllegalArgumentException("offset must be 0 or more, not " + offset.getAsInt());
+      throw new InputException("offset must be 0 or more, not " + offset.getAsInt());
     }
     Optional<Ordered> o = ordered(key);
     if (o.isEmpty()) {
@@ -213,9 +212,9 @@ public final class ReviewQueues {
   }
 
   private Resolved resolve(QueueKey key) throws InputException {
-    String wave = PhraseMining.known(key.wave(), store.waveNames(), "--wave");
+    String wave = Lookups.wave(key.wave(), store.waveNames(), "wave");
     List<String> questions = store.questions();
-    String question = PhraseMining.question(key.question(), questions);
+    String question = Lookups.question(key.question(), questions);
     int number = questions.indexOf(question) + 1;
     if (key.segmentColumn().isEmpty()) {
       return new Resolved(wave, question, number, "", "");
@@ -228,7 +227,7 @@ public final class ReviewQueues {
             .findFirst()
             .orElseThrow(
                 () ->
-                    new IllegalArgumentException(
+                    new InputException(
                         "the respondents of wave \""
                             + wave
                             + "\" have no segment column \""
@@ -290,7 +289,7 @@ public final class ReviewQueues {
 
   private static void checkLimit(int limit) {
     if (limit < 1 || limit > AnswerQuery.MAX_LIMIT) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "limit must be from 1 to " + AnswerQuery.MAX_LIMIT + ", not " + limit);
     }
   }

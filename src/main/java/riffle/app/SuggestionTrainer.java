@@ -8,7 +8,6 @@ import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicReference;
 import riffle.coding.SuggestSettings;
-import riffle.model.InputException;
 import riffle.store.ProjectStore;
 
 /**
@@ -84,7 +83,7 @@ public final class SuggestionTrainer implements AutoCloseable {
     try (ProjectStore store = ProjectStore.openExisting(file)) {
       latest.set(Suggestions.train(store, settings));
       lastProblem.set(null);
-    } catch (InputException | RuntimeException e) {
+    } catch (RuntimeException e) {
       lastProblem.set("suggestions could not be trained: " + e.getMessage());
     }
   }

@@ -36,6 +36,7 @@ import riffle.model.InputProblem;
 import riffle.model.NewAnswer;
 import riffle.model.NewRespondent;
 import riffle.model.Progress;
+import riffle.model.SettingException;
 import riffle.model.WaveBatch;
 import riffle.store.ProjectFileException;
 import riffle.store.ProjectStore;
@@ -67,28 +68,28 @@ final class WaveImporter {
       throws InputException {
     String wave = request.wave().map(String::strip).orElseGet(() -> defaultWave(request));
     if (wave.isEmpty()) {
-      throw new IllegalArgumentException("the wave name is empty; give one with --wave NAME");
+      throw new SettingException("wave", "the wave name is empty; name the wave");
     }
     if (request.wave().isEmpty()) {
       try {
         ControlChars.checkName("the wave name", wave);
-      } catch (IllegalArgumentException e) {
-        throw new IllegalArgumentException(
-            e.getMessage() + " (it comes from the file's name; name the wave with --wave NAME)", e);
+      } catch (InputException e) {
+        throw new SettingException(
+            "wave", e.getMessage() + " (it comes from the file's name; name the wave instead)");
       }
     }
     Optional<LocalDate> stored = store.waveDate(wave);
     if (stored.isPresent()
         && request.fieldedOn().isPresent()
         && !stored.get().equals(request.fieldedOn().get())) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "wave \""
               + wave
               + "\" is dated "
               + stored.get()
               + ", not "
               + request.fieldedOn().get()
-              + "; leave out --date to add to it, or name a new wave");
+              + "; leave out its date to add to it, or name a new wave");
     }
     LocalDate date =
         stored

@@ -60,7 +60,7 @@ final class CodeCommand implements Callable<Integer> {
   public Integer call() throws InputException {
     Optional<Span> marked = span == null ? Optional.empty() : Optional.of(span(span));
     if (marked.isPresent() && what.add == null) {
-      throw new IllegalArgumentException("--span goes with --add");
+      throw new InputException("--span goes with --add");
     }
     return CodesCommand.change(
         spec,
@@ -91,7 +91,7 @@ final class CodeCommand implements Callable<Integer> {
     } catch (NumberFormatException e) {
       // reported below
     }
-    throw new IllegalArgumentException(
+    throw new InputException(
         "--span " + text + ": write the start and end offsets as START:END, such as 4:17");
   }
 }

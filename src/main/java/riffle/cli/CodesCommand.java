@@ -25,7 +25,12 @@ import riffle.model.EditOutcome;
 import riffle.model.InputException;
 import riffle.model.InputProblem;
 
-/** {@code riffle codes}: the codebook — list, add, change, merge, split, archive, files. */
+/**
+ * {@code riffle codes}: the codebook — list, add, change, merge, split, archive, files.
+ *
+ * <p>Size: one nested class per subcommand of {@code codes}, as picocli reads them; each is a few
+ * lines of options and one call into {@code app}.
+ */
 @Command(
     name = "codes",
     mixinStandardHelpOptions = true,
@@ -188,7 +193,7 @@ final class CodesCommand implements Callable<Integer> {
                   try {
                     ids.add(Long.parseLong(e.strip()));
                   } catch (NumberFormatException bad) {
-                    throw new IllegalArgumentException(
+                    throw new InputException(
                         "--examples " + e + ": give answer ids, such as 12,31");
                   }
                 }

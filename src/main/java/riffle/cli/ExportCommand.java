@@ -100,8 +100,7 @@ final class ExportCommand implements Callable<Integer> {
                   case JSON -> p.codebook().exportCodebook("codebook.json");
                   case MD -> p.reporting().codebookMarkdown("Codebook — " + title);
                   case HTML, TXT ->
-                      throw new IllegalArgumentException(
-                          "the codebook is written as csv, json or md");
+                      throw new InputException("the codebook is written as csv, json or md");
                 };
             case FINDINGS ->
                 switch (format) {
@@ -116,8 +115,7 @@ final class ExportCommand implements Callable<Integer> {
                               .writeValueAsString(p.reporting().findings(findings))
                           + "\n";
                   case CSV, TXT ->
-                      throw new IllegalArgumentException(
-                          "the findings are written as html, md or json");
+                      throw new InputException("the findings are written as html, md or json");
                 };
             case QUOTES ->
                 switch (format) {
@@ -130,8 +128,7 @@ final class ExportCommand implements Callable<Integer> {
                               .writeValueAsString(p.quotes().board())
                           + "\n";
                   case HTML ->
-                      throw new IllegalArgumentException(
-                          "the copy board is written as md, txt, csv or json");
+                      throw new InputException("the copy board is written as md, txt, csv or json");
                 };
           };
     } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
@@ -150,7 +147,7 @@ final class ExportCommand implements Callable<Integer> {
 
   private static void require(boolean ok, String message) {
     if (!ok) {
-      throw new IllegalArgumentException(message);
+      throw new InputException(message);
     }
   }
 }

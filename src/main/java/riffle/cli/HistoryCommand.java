@@ -38,7 +38,7 @@ final class HistoryCommand implements Callable<Integer> {
   @Override
   public Integer call() throws InputException {
     if (limit < 1) {
-      throw new IllegalArgumentException("--limit must be at least 1, not " + limit);
+      throw new InputException("--limit must be at least 1, not " + limit);
     }
     List<HistoryEntry> entries;
     try (Project p = Project.openExisting(project)) {

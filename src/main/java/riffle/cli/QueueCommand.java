@@ -186,7 +186,7 @@ final class QueueCommand implements Callable<Integer> {
         page = p.queues().next(key, limit);
       }
       if (page.isEmpty()) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "no random order has been started for wave \""
                 + which.wave
                 + "\", question "

@@ -58,7 +58,7 @@ final class SearchCommand implements Callable<Integer> {
   @Override
   public Integer call() throws InputException {
     if (limit < 1 || limit > 10_000) {
-      throw new IllegalArgumentException("--limit must be between 1 and 10000, not " + limit);
+      throw new InputException("--limit must be between 1 and 10000, not " + limit);
     }
     SearchResult result;
     try (Project p = Project.openExisting(project)) {

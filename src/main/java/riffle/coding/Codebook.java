@@ -15,6 +15,7 @@ import riffle.model.Code;
 import riffle.model.CodeDraft;
 import riffle.model.ControlChars;
 import riffle.model.Direction;
+import riffle.model.InputException;
 
 /** The codebook's rules: drafts applied to codes, and the whole book checked. */
 public final class Codebook {
@@ -44,7 +45,7 @@ public final class Codebook {
     return find(book, name)
         .orElseThrow(
             () ->
-                new IllegalArgumentException(
+                new InputException(
                     "no code named \""
                         + name.strip()
                         + "\""
@@ -61,7 +62,7 @@ public final class Codebook {
     return book.stream()
         .filter(c -> c.id() == id)
         .findFirst()
-        .orElseThrow(() -> new IllegalArgumentException("no code with id " + id));
+        .orElseThrow(() -> new InputException("no code with id " + id));
   }
 
   /**
@@ -75,7 +76,7 @@ public final class Codebook {
         draft
             .name()
             .filter(n -> !n.isBlank())
-            .orElseThrow(() -> new IllegalArgumentException("a code needs a name"));
+            .orElseThrow(() -> new InputException("a code needs a name"));
     int position = book.stream().mapToInt(Code::position).max().orElse(0) + 1;
     Code blank =
         new Code(
@@ -184,10 +185,10 @@ public final class Codebook {
     }
     for (Code c : book) {
       if (c.name().isBlank()) {
-        throw new IllegalArgumentException("a code needs a name");
+        throw new InputException("a code needs a name");
       }
       if (c.name().length() > MAX_NAME) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "the name \""
                 + c.name().substring(0, 20)
                 + "…\" is longer than "
@@ -196,17 +197,17 @@ public final class Codebook {
       }
       Code same = names.putIfAbsent(fold(c.name()), c);
       if (same != null) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "there is already a code named \"" + same.name() + "\"; pick another name or merge");
       }
       if (c.key().isPresent()) {
         String k = c.key().get();
         if (!KEY.matcher(k).matches()) {
-          throw new IllegalArgumentException(
+          throw new InputException(
               "key \"" + k + "\" of \"" + c.name() + "\": a key is one letter (a-z) or digit");
         }
         if (RESERVED_KEYS.contains(k)) {
-          throw new IllegalArgumentException(
+          throw new InputException(
               "key \""
                   + k
                   + "\" moves between answers or undoes while coding; give \""
@@ -215,21 +216,21 @@ public final class Codebook {
         }
         Code holder = keys.putIfAbsent(k, c);
         if (holder != null) {
-          throw new IllegalArgumentException(
+          throw new InputException(
               "key \"" + k + "\" already belongs to \"" + holder.name() + "\"; pick another key");
         }
       }
       if (c.colour().isPresent() && !COLOUR.matcher(c.colour().get()).matches()) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "colour \"" + c.colour().get() + "\" of \"" + c.name() + "\": write it as #rrggbb");
       }
       if (c.parent().isPresent()) {
         Code p = ids.get(c.parent().getAsLong());
         if (p == null) {
-          throw new IllegalArgumentException("\"" + c.name() + "\" is under a code that is gone");
+          throw new InputException("\"" + c.name() + "\" is under a code that is gone");
         }
         if (p.id() == c.id()) {
-          throw new IllegalArgumentException("\"" + c.name() + "\" cannot be its own theme");
+          throw new InputException("\"" + c.name() + "\" cannot be its own theme");
         }
         if (p.parent().isPresent()) {
           throw cycleOrDepth(book, c, p, ids);
@@ -238,8 +239,7 @@ public final class Codebook {
     }
   }
 
-  private static IllegalArgumentException cycleOrDepth(
-      List<Code> book, Code c, Code p, Map<Long, Code> ids) {
+  private static InputException cycleOrDepth(List<Code> book, Code c, Code p, Map<Long, Code> ids) {
     Set<Long> seen = new HashSet<>();
     Code at = c;
     while (at.parent().isPresent() && seen.add(at.id())) {
@@ -248,11 +248,11 @@ public final class Codebook {
         break;
       }
       if (at.id() == c.id()) {
-        return new IllegalArgumentException(
+        return new InputException(
             "\"" + c.name() + "\" would end up under itself; pick a theme outside its own branch");
       }
     }
-    return new IllegalArgumentException(
+    return new InputException(
         "\""
             + p.name()
             + "\" is itself under \""

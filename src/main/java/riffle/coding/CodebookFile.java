@@ -67,7 +67,7 @@ public final class CodebookFile {
       if (lower.endsWith(".csv")) {
         return CSV;
       }
-      throw new IllegalArgumentException(fileName + ": a codebook file ends in .csv or .json");
+      throw new InputException(fileName + ": a codebook file ends in .csv or .json");
     }
   }
 
@@ -156,8 +156,6 @@ public final class CodebookFile {
         }
         rows.add(row(source, line, cells, header));
       }
-    } catch (InputException e) {
-      throw e;
     } catch (IOException | UncheckedIOException | IllegalStateException e) {
       throw problem(source, 0, 0, "cannot be read as CSV (" + e.getMessage() + ")");
     }

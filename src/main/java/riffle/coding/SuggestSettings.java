@@ -1,5 +1,7 @@
 package riffle.coding;
 
+import riffle.model.InputException;
+
 /**
  * How the suggestion engine learns and chooses thresholds. Immutable; build with {@link
  * #builder()}, which validates in {@link Builder#get()}.
@@ -138,18 +140,17 @@ public final class SuggestSettings {
      */
     public SuggestSettings get() {
       if (folds < 2 || folds > 20) {
-        throw new IllegalArgumentException("folds must be between 2 and 20, got " + folds);
+        throw new InputException("folds must be between 2 and 20, got " + folds);
       }
       if (!(targetPrecision > 0 && targetPrecision <= 1)) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "targetPrecision must be above 0 and at most 1, got " + targetPrecision);
       }
       if (minExamples < 2 || minExamples > 10_000) {
-        throw new IllegalArgumentException(
-            "minExamples must be between 2 and 10000, got " + minExamples);
+        throw new InputException("minExamples must be between 2 and 10000, got " + minExamples);
       }
       if (cutoff < 1 || cutoff > 100) {
-        throw new IllegalArgumentException("cutoff must be between 1 and 100, got " + cutoff);
+        throw new InputException("cutoff must be between 1 and 100, got " + cutoff);
       }
       return new SuggestSettings(this);
     }

@@ -66,6 +66,9 @@ import riffle.model.SearchResult;
  * caller compares the stamp with the project and writes when they differ. A folder that holds no
  * readable index (missing, damaged, another version) reads as empty with no stamp, and the next
  * writer replaces it. Searches are thread-safe; refreshing and writing belong to one thread.
+ *
+ * <p>Size: one class because the reader, the writer, the stamp and the lock are one Lucene folder's
+ * life cycle; the analysts' query language is parsed elsewhere ({@link AnalystQueryParser}).
  */
 public final class AnswerIndex implements AutoCloseable {
   /** Bump when fields or analysis change: older indexes are then rebuilt. */

@@ -2,6 +2,7 @@ package riffle.ingest;
 
 import java.util.Locale;
 import java.util.Optional;
+import riffle.model.InputException;
 
 /** The character that separates the fields of a survey export. */
 public enum Delimiter {
@@ -43,7 +44,7 @@ public enum Delimiter {
    */
   public static Optional<Delimiter> parse(String s) {
     if (s == null) {
-      throw new IllegalArgumentException("missing delimiter; use " + ACCEPTED);
+      throw new InputException("missing delimiter; use " + ACCEPTED);
     }
     if (s.equals("\t")) {
       return Optional.of(TAB);
@@ -65,7 +66,7 @@ public enum Delimiter {
       case "pipe":
         return Optional.of(PIPE);
       default:
-        throw new IllegalArgumentException("unknown delimiter '" + s + "'; use " + ACCEPTED);
+        throw new InputException("unknown delimiter '" + s + "'; use " + ACCEPTED);
     }
   }
 

@@ -30,6 +30,9 @@ import java.util.Optional;
  * <p>Whatever the encoding, a line that reads like UTF-8 text decoded as windows-1252 once before
  * it reached the export ({@code CafÃ© crÃ¨me} for {@code Café crème}) gets a warning; its text is
  * kept as it is.
+ *
+ * <p>Size: one class because the sniffing order above is one decision over the same bytes, and the
+ * per-line decoding of mixed files shares its counts and warnings.
  */
 final class EncodingSniffer {
   /**
@@ -137,9 +140,12 @@ final class EncodingSniffer {
     for (int i = 0; i < n; i++) {
       if (b[i] == 0) {
         throw new BadInput(
+            0,
+            0,
             BINARY
-                + " (it holds NUL bytes; if it is a UTF-16 text export, use --encoding UTF-16LE"
-                + " or UTF-16BE)");
+                + " (it holds NUL bytes; if it is a UTF-16 text export, set the encoding to UTF-16LE"
+                + " or UTF-16BE)",
+            "encoding");
       }
     }
     String utf8 = tryStrict(b, 0, StandardCharsets.UTF_8);
@@ -313,7 +319,7 @@ final class EncodingSniffer {
               1,
               "the file starts with the byte-order mark of another encoding than "
                   + cs.name()
-                  + "; if the header looks garbled, use --encoding auto"));
+                  + "; if the header looks garbled, set the encoding to auto"));
     }
     if (replaced) {
       warnings.add(
@@ -321,7 +327,7 @@ final class EncodingSniffer {
               TableParser.lineOf(text, text.indexOf('\uFFFD')),
               "some bytes are not valid "
                   + cs.name()
-                  + " and show as \uFFFD; check the --encoding option or use --encoding auto"));
+                  + " and show as \uFFFD; check the encoding, or set it to auto"));
     }
     return new Decoded(text, label, false, List.copyOf(warnings));
   }

@@ -10,6 +10,8 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import riffle.model.InputException;
+import riffle.model.SettingException;
 
 /**
  * How to read one survey export: delimiter and encoding (or sniff them), the columns the analyst
@@ -168,13 +170,13 @@ public final class ImportSettings {
    * returns this builder.
    */
   public static final class Builder {
-    static final String TEXT = "--text-column";
-    static final String ID = "--id-column";
-    static final String DATE = "--date-column";
-    static final String CODES = "--codes-column";
-    static final String CODER = "--coder-column";
-    static final String META = "--meta-column";
-    static final String SKIP = "--skip-column";
+    static final String TEXT = "text column";
+    static final String ID = "id column";
+    static final String DATE = "date column";
+    static final String CODES = "codes column";
+    static final String CODER = "coder column";
+    static final String META = "segment column";
+    static final String SKIP = "skipped column";
 
     private Delimiter delimiter;
     private Charset encoding;
@@ -216,7 +218,7 @@ public final class ImportSettings {
       try {
         this.encoding = Charset.forName(name.strip());
       } catch (IllegalCharsetNameException | UnsupportedCharsetException e) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "unknown encoding '"
                 + name
                 + "'; use auto or a name such as UTF-8, windows-1252, UTF-16LE",
@@ -293,18 +295,16 @@ public final class ImportSettings {
      */
     public ImportSettings get() {
       if (maxBytes <= 0) {
-        throw new IllegalArgumentException(
-            "the size limit must be positive, got " + maxBytes + " bytes; give --max-mb 1 or more");
+        throw new InputException(
+            "the max size must be positive, not " + maxBytes + " bytes; give 1 MiB or more");
       }
       if (maxProblems <= 0) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "the number of problems listed must be positive, got " + maxProblems);
       }
       if (maxColumns <= 0) {
-        throw new IllegalArgumentException(
-            "the column limit must be positive, got "
-                + maxColumns
-                + "; give --max-columns 1 or more");
+        throw new InputException(
+            "the column limit must be positive, got " + maxColumns + "; give 1 or more");
       }
       dedupe(textColumns);
       dedupe(codesColumns);
@@ -317,14 +317,14 @@ public final class ImportSettings {
           String key = key(name);
           String earlier = optionByName.putIfAbsent(key, e.getKey());
           if (earlier != null && !earlier.equals(e.getKey())) {
-            throw new IllegalArgumentException(
+            throw new InputException(
                 "column '"
                     + name
-                    + "' is named by both "
+                    + "' is given two roles, "
                     + earlier
                     + " and "
                     + e.getKey()
-                    + "; a column has one role, so keep only one of the two options for it");
+                    + "; a column has one role, so keep only one of the two for it");
           }
         }
       }
@@ -335,7 +335,7 @@ public final class ImportSettings {
       Objects.requireNonNull(header, option);
       String name = header.strip();
       if (name.isEmpty()) {
-        throw new IllegalArgumentException(option + " needs a column name, got a blank one");
+        throw new SettingException(option, "the " + option + " needs a name, not a blank one");
       }
       return name;
     }

@@ -75,11 +75,12 @@ final class RoleDetector {
               0,
               "no column named '"
                   + wanted
-                  + "' ("
+                  + "' (the "
                   + e.getKey()
                   + "); the header has: "
                   + listed(names)
-                  + "; check the name, or the --delimiter option if this list looks wrong");
+                  + "; check the name, or the delimiter if this list looks wrong",
+              e.getKey());
         }
         roles[i] = role;
       }
@@ -231,7 +232,8 @@ final class RoleDetector {
       throw new BadInput(
           line,
           0,
-          "no open-text column found; columns: " + listed(names) + "; name one with --text-column");
+          "no open-text column found; columns: " + listed(names) + "; name the text column",
+          "text column");
     }
     List<Column> columns = new ArrayList<>(roles.length);
     int lastText = -1;

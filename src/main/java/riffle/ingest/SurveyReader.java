@@ -77,8 +77,7 @@ public final class SurveyReader {
           new TableParser.Input(source, d.text(), d.label(), d.detected(), d.warnings(), false),
           settings);
     } catch (BadInput e) {
-      throw new UnreadableInputException(
-          new InputProblem(source, e.line(), e.column(), e.getMessage()));
+      throw new UnreadableInputException(e.at(source));
     }
   }
 
@@ -107,8 +106,7 @@ public final class SurveyReader {
       return TableParser.parse(
           new TableParser.Input(source, t, "pasted text", false, List.of(), true), settings);
     } catch (BadInput e) {
-      throw new UnreadableInputException(
-          new InputProblem(source, e.line(), e.column(), e.getMessage()));
+      throw new UnreadableInputException(e.at(source));
     }
   }
 
@@ -126,9 +124,10 @@ public final class SurveyReader {
             + bytes(size)
             + ", over the limit of "
             + bytes(max)
-            + "; raise the limit with --max-mb "
+            + "; raise the max size to "
             + suggested
-            + " or split the export");
+            + " MiB or split the export",
+        "max size");
   }
 
   /** Formats a size in MB (1 MB = 1,048,576 bytes) from 1 MB up, else in bytes. */
@@ -163,5 +162,11 @@ public final class SurveyReader {
 
   private static UnreadableInputException unreadable(String source, String message) {
     return new UnreadableInputException(new InputProblem(source, 0, 0, message));
+  }
+
+  private static UnreadableInputException unreadable(
+      String source, String message, String setting) {
+    return new UnreadableInputException(
+        new InputProblem(source, 0, 0, message, java.util.Optional.of(setting)));
   }
 }

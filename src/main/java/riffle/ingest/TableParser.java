@@ -60,11 +60,12 @@ final class TableParser {
           String.format(
               Locale.ROOT,
               "the header has %,d columns, over the limit of %,d; keep only the columns the"
-                  + " analysis needs (delete the others in the spreadsheet), or raise the limit"
-                  + " with --max-columns %d",
+                  + " analysis needs (delete the others in the spreadsheet), or raise the column"
+                  + " limit to %d",
               width,
               settings.maxColumns(),
-              width));
+              width),
+          "max columns");
     }
     String[] names = HeaderNames.of(header.cells(), width, header.line(), problems);
     ColumnRole[] named = RoleDetector.named(names, settings, header.line());
@@ -105,8 +106,8 @@ final class TableParser {
               + " with the delimiter "
               + delimiter.label()
               + (delimiterDetected ? " (detected)" : " (as given)")
-              + "; the delimiter is probably wrong: set it with --delimiter"
-              + " (comma, semicolon, tab or pipe)");
+              + "; the delimiter is probably wrong: set it (comma, semicolon, tab or pipe)",
+          "delimiter");
     }
     if (text.indexOf('"') >= 0) {
       for (long[] q :

@@ -96,7 +96,7 @@ public final class ControlChars {
   public static String checkName(String what, String name) {
     Optional<String> problem = problem(what, name);
     if (problem.isPresent()) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           problem.get() + "; a name is one line of ordinary characters: give it without that one");
     }
     return name;

@@ -39,10 +39,10 @@ public record ReviewQueue(
     Objects.requireNonNull(startedBy, "startedBy");
     Objects.requireNonNull(startedAt, "startedAt");
     if (segmentColumn.isPresent() != segmentValue.isPresent()) {
-      throw new IllegalArgumentException("a segment needs both its column and its value");
+      throw new InputException("a segment needs both its column and its value");
     }
     if (seed < 0 || seed > MAX_SEED) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "a queue's seed is a whole number from 0 to " + MAX_SEED + ", not " + seed);
     }
   }

@@ -9,8 +9,7 @@ package riffle.model;
 public record Span(int start, int end) {
   public Span {
     if (start < 0 || end <= start) {
-      throw new IllegalArgumentException(
-          "a span needs 0 <= start < end, got " + start + ".." + end);
+      throw new InputException("a span needs 0 <= start < end, got " + start + ".." + end);
     }
   }
 }

@@ -4,6 +4,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Objects;
 import java.util.Set;
+import riffle.model.InputException;
 
 /**
  * How phrases are mined. Immutable; build with {@link #builder()}, which validates in {@link
@@ -211,17 +212,17 @@ public final class PhraseSettings {
      */
     public PhraseSettings get() {
       if (minAnswers < 2) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "minAnswers must be at least 2 (a phrase must recur), got " + minAnswers);
       }
       if (maxWords < 1 || maxWords > 8) {
-        throw new IllegalArgumentException("maxWords must be between 1 and 8, got " + maxWords);
+        throw new InputException("maxWords must be between 1 and 8, got " + maxWords);
       }
       if (limit < 1 || limit > 10_000) {
-        throw new IllegalArgumentException("limit must be between 1 and 10000, got " + limit);
+        throw new InputException("limit must be between 1 and 10000, got " + limit);
       }
       if (examples < 0 || examples > 20) {
-        throw new IllegalArgumentException("examples must be between 0 and 20, got " + examples);
+        throw new InputException("examples must be between 0 and 20, got " + examples);
       }
       return new PhraseSettings(this);
     }

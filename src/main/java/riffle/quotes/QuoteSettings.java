@@ -7,6 +7,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.TreeMap;
 import java.util.TreeSet;
+import riffle.model.InputException;
 
 /**
  * How quotes are ranked and which answers they come from. Immutable; build with {@link #builder()},
@@ -227,7 +228,7 @@ public final class QuoteSettings {
     /** The settings, checked; a bad value is rejected with what is allowed. */
     public QuoteSettings get() {
       if (minWords < 1 || maxWords < minWords || maxWords > 100) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "quote length must satisfy 1 <= min words <= max words <= 100, got "
                 + minWords
                 + " to "
@@ -239,19 +240,18 @@ public final class QuoteSettings {
       range("leading themes", leadingThemes, 1, 100);
       range("quotes per objection", objectionQuotes, 1, 20);
       if (!(similarity > 0 && similarity <= 1)) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             "the near-duplicate similarity must be above 0 and at most 1, got " + similarity);
       }
       if (latestWave.isPresent() && latestWave.get().isBlank()) {
-        throw new IllegalArgumentException("the latest wave needs a name");
+        throw new InputException("the latest wave needs a name");
       }
       return new QuoteSettings(this);
     }
 
     private static void range(String what, int value, int min, int max) {
       if (value < min || value > max) {
-        throw new IllegalArgumentException(
-            what + " must be " + min + " to " + max + ", got " + value);
+        throw new InputException(what + " must be " + min + " to " + max + ", got " + value);
       }
     }
   }

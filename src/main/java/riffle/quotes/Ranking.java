@@ -19,7 +19,13 @@ import riffle.model.Sentence;
 import riffle.model.Span;
 import riffle.model.Token;
 
-/** One ranking run over a fixed set of answers and a codebook (see the package documentation). */
+/**
+ * One ranking run over a fixed set of answers and a codebook (see the package documentation).
+ *
+ * <p>Size: one class because each step (candidate clauses, scores, near-duplicate folding, per-slot
+ * picks) reads the state the earlier steps left for the same run; the clause and word rules live in
+ * {@link Clauses} and {@link QuoteWords}.
+ */
 final class Ranking {
   /** An answer with what the ranking reads from it. */
   private static final class Prepared {

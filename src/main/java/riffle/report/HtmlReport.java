@@ -23,6 +23,9 @@ import riffle.model.WaveChange;
  * The findings as one self-contained HTML page: inline CSS and SVG, no scripts, no fetches. Every
  * piece of text from the project (questions, waves, code names) is escaped, never inserted as
  * markup.
+ *
+ * <p>Size: one class because the page is one document written top to bottom; most of its lines are
+ * markup and inline CSS for the sections it writes in order.
  */
 final class HtmlReport {
   private HtmlReport() {}

@@ -2,6 +2,8 @@ package riffle.report;
 
 import java.util.Objects;
 import java.util.Optional;
+import riffle.model.InputException;
+import riffle.model.SettingException;
 
 /**
  * Options of a findings computation.
@@ -27,11 +29,12 @@ public record ReportSettings(
     Objects.requireNonNull(from, "from");
     Objects.requireNonNull(to, "to");
     if (from.isPresent() != to.isPresent()) {
-      throw new IllegalArgumentException("a comparison needs both waves: give --from and --to");
+      throw new SettingException(
+          from.isEmpty() ? "from" : "to",
+          "a comparison needs both waves: the one to compare from and the one to compare to");
     }
     if (from.isPresent() && from.equals(to)) {
-      throw new IllegalArgumentException(
-          "compare two different waves, not " + from.get() + " with itself");
+      throw new InputException("compare two different waves, not " + from.get() + " with itself");
     }
   }
 

@@ -23,6 +23,9 @@ import riffle.store.RowImages.Table;
  * ProjectStore#edit}). Reads see the project as it is inside the transaction; every write is
  * recorded as a step (the row's image before and after) so that the change can be undone and
  * redone, and nothing is written for a step that changes nothing.
+ *
+ * <p>Size: one class because every read and write of an edit goes through the one transaction and
+ * the one list of steps that undo replays; it is the only writer of the coding tables.
  */
 public final class CodingEdit {
   private final Path file;

@@ -37,6 +37,10 @@ import riffle.model.WaveBatch;
 /**
  * An open project file. Not thread-safe: one instance per thread (each holds its own connection);
  * several instances, in one process or many, may share a file.
+ *
+ * <p>Size: the store package's one public door, so that callers hold one handle to one connection;
+ * nearly every method is a few lines handing one read or write to the row class of its tables
+ * ({@code AnswerRows}, {@code CodingRows}, {@code QueueRows} …) inside its own transaction.
  */
 public final class ProjectStore implements AutoCloseable {
   /** Marks a SQLite file as a Riffle project ({@code PRAGMA application_id}). */
@@ -98,7 +102,7 @@ public final class ProjectStore implements AutoCloseable {
     try {
       store.prepareSchema();
       return store;
-    } catch (ProjectFileException | RuntimeException e) {
+    } catch (RuntimeException e) {
       store.close();
       throw e;
     }

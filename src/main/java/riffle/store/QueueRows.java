@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import riffle.model.InputException;
 import riffle.model.ReviewQueue;
 
 /**
@@ -97,7 +98,7 @@ final class QueueRows {
       added = ps.executeUpdate();
     }
     if (added == 0) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "there is no wave \"" + wave + "\" with the question \"" + question + "\"");
     }
     ReviewQueue made = find(c, wave, question, column, value).orElseThrow();

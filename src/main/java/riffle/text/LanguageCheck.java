@@ -12,6 +12,7 @@ import java.util.regex.Pattern;
 import opennlp.tools.langdetect.Language;
 import opennlp.tools.langdetect.LanguageDetectorME;
 import opennlp.tools.langdetect.LanguageDetectorModel;
+import riffle.model.InputException;
 
 /**
  * Tells whether an answer is written in the analysis language, so that a German answer is not fed
@@ -153,7 +154,7 @@ final class LanguageCheck {
     LanguageDetectorME me = new LanguageDetectorME(model);
     Set<String> supported = new HashSet<>(Arrays.asList(me.getSupportedLanguages()));
     if (!supported.contains(analysisLanguage)) {
-      throw new IllegalArgumentException(
+      throw new InputException(
           "unknown analysis language '"
               + analysisLanguage
               + "'; give an ISO 639-3 code the language model knows, such as eng");

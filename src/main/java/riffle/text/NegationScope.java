@@ -95,6 +95,9 @@ import riffle.words.WordList;
  *   <li>Ambiguous words decided by tags inherit the tagger's mistakes (a verb tagged as a noun
  *       after "and" keeps the scope open).
  * </ul>
+ *
+ * <p>Size: one class because cues, scope ends and the few tag-decided words are one left-to-right
+ * pass over a sentence; its word lists are in {@code riffle/words/en/negation-*.txt}.
  */
 final class NegationScope {
 

@@ -276,6 +276,9 @@ import riffle.model.PiiType;
  * <p>Offsets count UTF-16 code units of the text as given (the pipeline gives the NFC text); a mask
  * never splits a surrogate pair. Digits of any script count as digits ({@code ０７７００ ９００１２３} is a
  * phone number).
+ *
+ * <p>Size: most of its lines are this documentation of what is masked and why; the finders
+ * themselves live in the {@code Pii*} classes it calls.
  */
 public final class PiiMasker {
   private static final PiiMasker STANDARD =

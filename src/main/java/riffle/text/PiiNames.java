@@ -12,6 +12,9 @@ import riffle.model.PiiType;
  * last line as a sign-off. Rules and limits are documented on {@link PiiMasker}: names after "my
  * name is" and "name:" are taken in any case; after every other cue the words must be capitalised
  * and {@link PiiNameCheck} must read them as a proper noun that is no product, brand or place.
+ *
+ * <p>Size: one class because every cue, the sign-off line and the proper-noun check share the one
+ * walk over an answer's tokens and its bookkeeping of what is already masked.
  */
 final class PiiNames {
   /** The cue phrases, each in a named group saying which rule applies after it. */

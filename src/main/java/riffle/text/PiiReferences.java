@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.regex.PatternSyntaxException;
+import riffle.model.InputException;
 import riffle.model.PiiType;
 
 /** Order, invoice and tracking references, found by a list of regular expressions. */
@@ -44,20 +45,20 @@ final class PiiReferences {
    */
   static List<Ref> compile(List<String> regexes) {
     if (regexes == null) {
-      throw new IllegalArgumentException("the list of reference patterns is missing");
+      throw new InputException("the list of reference patterns is missing");
     }
     List<Ref> out = new ArrayList<>(regexes.size());
     for (int i = 0; i < regexes.size(); i++) {
       String regex = regexes.get(i);
       String which = "reference pattern " + (i + 1) + " of " + regexes.size();
       if (regex == null || regex.isEmpty()) {
-        throw new IllegalArgumentException(which + " is empty; give a regular expression");
+        throw new InputException(which + " is empty; give a regular expression");
       }
       Pattern p;
       try {
         p = Pattern.compile(regex);
       } catch (PatternSyntaxException e) {
-        throw new IllegalArgumentException(
+        throw new InputException(
             which
                 + ", \""
                 + regex

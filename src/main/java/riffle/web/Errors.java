@@ -12,6 +12,7 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import riffle.model.InputException;
 import riffle.model.InputProblem;
+import riffle.model.SettingException;
 
 /**
  * Turns every failure into one JSON shape, {@code {"error": "...", "where": {...}}}: bad input is
@@ -48,19 +49,19 @@ final class Errors {
         where.put("line", p.line());
         where.put("column", p.column());
         message = p.message();
+        p.setting().ifPresent(setting -> where.put("setting", setting));
       }
-      return new Failure(input.located().isPresent() ? 400 : 422, body(message, where));
+      if (input instanceof SettingException s) {
+        where.put("setting", s.setting());
+      }
+      return new Failure(
+          input.located().isPresent() || input.inRequest() ? 400 : 422, body(message, where));
     }
     if (e instanceof ValidationException v) {
       return validation(v);
     }
     if (e instanceof HttpResponseException h) {
       return new Failure(h.getStatus(), body(forStatus(h.getStatus()), Map.of()));
-    }
-    if (e instanceof IllegalArgumentException) {
-      return new Failure(
-          400,
-          body(Objects.requireNonNullElse(e.getMessage(), "the request is not valid"), Map.of()));
     }
     StackTraceElement[] stack = e.getStackTrace();
     LOG.error(

@@ -22,6 +22,7 @@ import riffle.app.ImportReport;
 import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
 import riffle.model.ColumnRole;
+import riffle.model.InputException;
 import riffle.model.Progress;
 
 /**
@@ -239,12 +240,12 @@ final class Imports implements AutoCloseable {
     ImportRequest.Builder b = ImportRequest.from(source).actor(actor);
     try {
       b.delimiter(Optional.ofNullable(s.delimiter()).orElse("auto"));
-    } catch (IllegalArgumentException e) {
+    } catch (InputException e) {
       throw ApiError.badField("delimiter", e.getMessage());
     }
     try {
       b.encoding(Optional.ofNullable(s.encoding()).orElse("auto"));
-    } catch (IllegalArgumentException e) {
+    } catch (InputException e) {
       throw ApiError.badField("encoding", e.getMessage());
     }
     if (s.wave() != null) {
@@ -253,7 +254,7 @@ final class Imports implements AutoCloseable {
       }
       try {
         b.wave(s.wave().strip());
-      } catch (IllegalArgumentException e) {
+      } catch (InputException e) {
         throw ApiError.badField("wave", e.getMessage());
       }
     }
@@ -273,14 +274,14 @@ final class Imports implements AutoCloseable {
         }
         try {
           b.column(c.header(), c.role());
-        } catch (IllegalArgumentException e) {
+        } catch (InputException e) {
           throw ApiError.badField("columns." + i, e.getMessage());
         }
       }
     }
     try {
       return b.get();
-    } catch (IllegalArgumentException e) {
+    } catch (InputException e) {
       throw ApiError.badField("columns", e.getMessage());
     }
   }

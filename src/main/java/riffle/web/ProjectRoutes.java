@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import riffle.app.PhraseQuery;
 import riffle.app.Project;
+import riffle.model.SettingException;
 import riffle.model.ShownText;
 
 /** The API of the project as a whole: its name and counts, its changes, search and phrases. */
@@ -85,8 +86,8 @@ final class ProjectRoutes {
               segments,
               Requests.text(ctx, "against"),
               Requests.wholeNumber(ctx, "limit", 30, 1, 500));
-    } catch (IllegalArgumentException e) {
-      throw ApiError.badParameter("against", e.getMessage().replace("--", ""));
+    } catch (SettingException e) {
+      throw ApiError.badParameter(e.setting(), e.getMessage());
     }
     ctx.json(access.call(p -> p.phrases(query)));
   }

@@ -14,6 +14,7 @@ import riffle.app.AnswerQuery;
 import riffle.app.QueueKey;
 import riffle.app.QueuePage;
 import riffle.app.QueueStatus;
+import riffle.model.InputException;
 
 /**
  * The API of random review queues: start one for a wave and question (and segment), read its
@@ -107,7 +108,7 @@ final class QueueRoutes {
     }
     try {
       return QueueKey.of(wave.strip(), question.strip(), Optional.ofNullable(segment));
-    } catch (IllegalArgumentException e) {
+    } catch (InputException e) {
       throw missing(body, "segment", e.getMessage());
     }
   }

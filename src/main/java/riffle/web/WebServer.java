@@ -20,6 +20,7 @@ import java.util.Optional;
 import java.util.function.Consumer;
 import riffle.app.SuggestionTrainer;
 import riffle.model.InputException;
+import riffle.model.SettingException;
 
 /**
  * Serves one project to the browser: the JSON API under {@code /api/} and the page from {@code
@@ -56,13 +57,13 @@ public final class WebServer implements AutoCloseable {
       Objects.requireNonNull(host, "host");
       Objects.requireNonNull(webDir, "webDir");
       if (host.isBlank()) {
-        throw new IllegalArgumentException("--host needs an address, such as 127.0.0.1");
+        throw new SettingException("host", "the host needs an address, such as 127.0.0.1");
       }
       if (port < 0 || port > 65_535) {
-        throw new IllegalArgumentException("--port must be between 0 and 65535, not " + port);
+        throw new SettingException("port", "the port must be from 0 to 65535, not " + port);
       }
       if (waitMillis < 1) {
-        throw new IllegalArgumentException("waitMillis must be positive, not " + waitMillis);
+        throw new InputException("waitMillis must be positive, not " + waitMillis);
       }
     }
 
@@ -125,8 +126,8 @@ public final class WebServer implements AutoCloseable {
   public static WebServer start(Path project, Options options) throws InputException {
     if (options.webDir().isPresent()
         && !Files.isRegularFile(options.webDir().get().resolve("index.html"))) {
-      throw new IllegalArgumentException(
-          "--web-dir " + options.webDir().get() + " holds no index.html; point it at web/");
+      throw new SettingException(
+          "web folder", options.webDir().get() + " holds no index.html; point it at web/");
     }
     Optional<String> token =
         options.requireToken() || !Guard.isLoopback(options.host())

@@ -300,7 +300,7 @@ class CodingTest {
   }
 
   static void assertMessage(String words, Call call) {
-    IllegalArgumentException e = assertThrows(IllegalArgumentException.class, call::run);
+    InputException e = assertThrows(InputException.class, call::run);
     assertTrue(e.getMessage().contains(words), e.getMessage());
   }
 

@@ -20,6 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
 import riffle.coding.ReviewOrder;
 import riffle.model.Code;
 import riffle.model.CodeDraft;
+import riffle.model.InputException;
 import riffle.model.Progress;
 import riffle.model.ReadSample;
 import riffle.model.ReviewQueue;
@@ -168,13 +169,13 @@ class ReviewQueuesTest {
       assertFalse(again.startedNow());
       assertEquals("ana", again.queue().startedBy());
       assertEquals(again, p.queues().start("ben", key, OptionalLong.of(seed)));
-      IllegalArgumentException other =
+      InputException other =
           assertThrows(
-              IllegalArgumentException.class,
+              InputException.class,
               () -> p.queues().start("ben", key, OptionalLong.of(seed == 1 ? 2 : 1)));
       assertTrue(other.getMessage().contains("keeps that seed"), other.getMessage());
       assertThrows(
-          IllegalArgumentException.class,
+          InputException.class,
           () -> p.queues().start("ana", QueueKey.of("Wave 1", "1"), OptionalLong.of(-5)));
     }
     List<Long> before;
@@ -210,9 +211,9 @@ class ReviewQueuesTest {
       long[] expected =
           java.util.Arrays.stream(whole).filter(id -> ids(page).contains(id)).toArray();
       assertArrayEquals(expected, mine, "the segment's answers in the same keyed order");
-      IllegalArgumentException column =
+      InputException column =
           assertThrows(
-              IllegalArgumentException.class,
+              InputException.class,
               () ->
                   p.queues()
                       .start(
@@ -221,17 +222,15 @@ class ReviewQueuesTest {
                           OptionalLong.empty()));
       assertTrue(column.getMessage().contains("they have: device"), column.getMessage());
       assertThrows(
-          IllegalArgumentException.class,
+          InputException.class,
           () ->
               p.queues()
                   .start(
                       "ana",
                       QueueKey.of("Wave 1", "1", Optional.of("device=tv")),
                       OptionalLong.empty()));
-      assertThrows(
-          IllegalArgumentException.class, () -> QueueKey.of("Wave 1", "1", Optional.of("device")));
-      assertThrows(
-          IllegalArgumentException.class, () -> p.queues().status(QueueKey.of("Wave 9", "1")));
+      assertThrows(InputException.class, () -> QueueKey.of("Wave 1", "1", Optional.of("device")));
+      assertThrows(InputException.class, () -> p.queues().status(QueueKey.of("Wave 9", "1")));
       assertEquals(List.of(s.queue()), p.queues().all().stream().map(QueueStatus::queue).toList());
     }
   }

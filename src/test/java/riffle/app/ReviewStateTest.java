@@ -19,6 +19,7 @@ import riffle.model.AnswerRead;
 import riffle.model.Code;
 import riffle.model.CodeDraft;
 import riffle.model.EditOutcome;
+import riffle.model.InputException;
 import riffle.model.Progress;
 
 /**
@@ -93,7 +94,7 @@ class ReviewStateTest {
       c.unmarkRead("ana", a2);
       assertTrue(reads(p).containsKey(a2));
       assertEquals(1, c.assignments(List.of(a2)).get(a2).size());
-      assertThrows(IllegalArgumentException.class, () -> c.markRead("ana", 999_999));
+      assertThrows(InputException.class, () -> c.markRead("ana", 999_999));
     }
   }
 

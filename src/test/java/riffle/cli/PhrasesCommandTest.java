@@ -42,6 +42,20 @@ class PhrasesCommandTest {
   }
 
   @Test
+  void aWaveTheProjectLacksIsBadInputNamingItsOption() {
+    CliTest.Run run =
+        CliTest.riffle("phrases", "--project", project, "--wave", "Wave 3", "--against", "Wave 9");
+    assertEquals(2, run.code(), run.err());
+    assertTrue(
+        run.err()
+            .startsWith("riffle: --against: no wave named \"Wave 9\"; the waves are Pilot, Wave 1"),
+        run.err());
+    CliTest.Run question = CliTest.riffle("phrases", "--project", project, "--question", "7");
+    assertEquals(2, question.code(), question.err());
+    assertTrue(question.err().startsWith("riffle: --question: no question \"7\""), question.err());
+  }
+
+  @Test
   void showsTheSiteChangeAsAFallInWaveThree() throws Exception {
     JsonNode keyness =
         CliTest.riffle(

@@ -106,7 +106,7 @@ class CodebookFileTest {
             .getMessage()
             .contains("not UTF-8"));
     assertTrue(
-        assertThrows(IllegalArgumentException.class, () -> Format.of("book.xlsx"))
+        assertThrows(InputException.class, () -> Format.of("book.xlsx"))
             .getMessage()
             .contains(".csv or .json"));
   }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
+import riffle.model.InputException;
 
 class SuggestSettingsTest {
   @Test
@@ -50,6 +51,6 @@ class SuggestSettingsTest {
   }
 
   private static void assertMessage(String message, SuggestSettings.Builder b) {
-    assertEquals(message, assertThrows(IllegalArgumentException.class, b::get).getMessage());
+    assertEquals(message, assertThrows(InputException.class, b::get).getMessage());
   }
 }

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
+import riffle.model.InputException;
 
 class DelimiterTest {
   @Test
@@ -25,14 +26,13 @@ class DelimiterTest {
 
   @Test
   void rejectsUnknownDelimiterListingTheAcceptedValues() {
-    IllegalArgumentException e =
-        assertThrows(IllegalArgumentException.class, () -> Delimiter.parse("colon"));
+    InputException e = assertThrows(InputException.class, () -> Delimiter.parse("colon"));
     assertTrue(e.getMessage().startsWith("unknown delimiter 'colon'"), e.getMessage());
     for (String accepted : new String[] {"auto", "comma", "semicolon", "tab", "pipe"}) {
       assertTrue(e.getMessage().contains(accepted), e.getMessage());
     }
-    assertThrows(IllegalArgumentException.class, () -> Delimiter.parse(null));
-    assertThrows(IllegalArgumentException.class, () -> Delimiter.parse(""));
+    assertThrows(InputException.class, () -> Delimiter.parse(null));
+    assertThrows(InputException.class, () -> Delimiter.parse(""));
   }
 
   @Test

@@ -1,6 +1,7 @@
 package riffle.ingest;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -8,6 +9,8 @@ import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
+import riffle.model.InputException;
+import riffle.model.SettingException;
 
 class ImportSettingsTest {
   @Test
@@ -64,9 +67,8 @@ class ImportSettingsTest {
   @Test
   void rejectsUnknownEncodingNameWithTheFix() {
     for (String name : new String[] {"latin-9000", "not a charset", "???"}) {
-      IllegalArgumentException e =
-          assertThrows(
-              IllegalArgumentException.class, () -> ImportSettings.builder().encoding(name));
+      InputException e =
+          assertThrows(InputException.class, () -> ImportSettings.builder().encoding(name));
       assertEquals(
           "unknown encoding '"
               + name
@@ -77,39 +79,40 @@ class ImportSettingsTest {
 
   @Test
   void rejectsOneColumnNamedForTwoRolesNamingBothOptions() {
-    IllegalArgumentException e =
+    InputException e =
         assertThrows(
-            IllegalArgumentException.class,
+            InputException.class,
             () -> ImportSettings.builder().textColumn("Q1").codesColumn(" q1 ").get());
-    assertTrue(e.getMessage().contains("--text-column"), e.getMessage());
-    assertTrue(e.getMessage().contains("--codes-column"), e.getMessage());
+    assertTrue(e.getMessage().contains("text column"), e.getMessage());
+    assertTrue(e.getMessage().contains("codes column"), e.getMessage());
+    assertFalse(e.getMessage().contains("--"), "names settings, not options: " + e.getMessage());
     assertTrue(e.getMessage().contains("keep only one"), e.getMessage());
 
-    IllegalArgumentException meta =
+    InputException meta =
         assertThrows(
-            IllegalArgumentException.class,
+            InputException.class,
             () -> ImportSettings.builder().idColumn("Device").metaColumn("Device").get());
-    assertTrue(meta.getMessage().contains("--id-column and --meta-column"), meta.getMessage());
+    assertTrue(meta.getMessage().contains("id column and segment column"), meta.getMessage());
   }
 
   @Test
   void rejectsNonPositiveLimits() {
-    assertThrows(IllegalArgumentException.class, () -> ImportSettings.builder().maxBytes(0).get());
-    assertThrows(IllegalArgumentException.class, () -> ImportSettings.builder().maxBytes(-5).get());
-    assertThrows(
-        IllegalArgumentException.class, () -> ImportSettings.builder().maxProblems(0).get());
+    assertThrows(InputException.class, () -> ImportSettings.builder().maxBytes(0).get());
+    assertThrows(InputException.class, () -> ImportSettings.builder().maxBytes(-5).get());
+    assertThrows(InputException.class, () -> ImportSettings.builder().maxProblems(0).get());
     assertEquals(1, ImportSettings.builder().maxProblems(1).get().maxProblems());
-    IllegalArgumentException columns =
-        assertThrows(
-            IllegalArgumentException.class, () -> ImportSettings.builder().maxColumns(0).get());
-    assertTrue(columns.getMessage().contains("--max-columns"), columns.getMessage());
+    InputException columns =
+        assertThrows(InputException.class, () -> ImportSettings.builder().maxColumns(0).get());
+    assertTrue(columns.getMessage().contains("column limit"), columns.getMessage());
     assertEquals(5_000, ImportSettings.builder().maxColumns(5_000).get().maxColumns());
   }
 
   @Test
   void rejectsBlankColumnNames() {
-    assertThrows(IllegalArgumentException.class, () -> ImportSettings.builder().textColumn("  "));
-    assertThrows(IllegalArgumentException.class, () -> ImportSettings.builder().metaColumn(""));
+    SettingException blank =
+        assertThrows(SettingException.class, () -> ImportSettings.builder().textColumn("  "));
+    assertEquals("text column", blank.setting());
+    assertThrows(InputException.class, () -> ImportSettings.builder().metaColumn(""));
   }
 
   @Test

@@ -175,9 +175,10 @@ class RoleDetectorTest {
             () ->
                 Csv.read(csv("id,Main reason,device", i -> "K" + i + "," + words[i] + ",mobile")));
     assertEquals(
-        "test.csv:1: no open-text column found; columns: 'id', 'Main reason', 'device'; name one"
-            + " with --text-column",
+        "test.csv:1: no open-text column found; columns: 'id', 'Main reason', 'device'; name the"
+            + " text column",
         e.getMessage());
+    assertEquals(java.util.Optional.of("text column"), e.problem().setting());
   }
 
   @Test

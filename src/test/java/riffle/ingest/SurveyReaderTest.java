@@ -49,9 +49,10 @@ class SurveyReaderTest {
             () -> SurveyReader.readFile(file, ImportSettings.builder().get()));
     assertTrue(System.nanoTime() - start < 2_000_000_000L, "the size check must not read the file");
     assertEquals(
-        "huge.csv: file is 3072 MB, over the limit of 100 MB; raise the limit with --max-mb 3072"
-            + " or split the export",
+        "huge.csv: file is 3072 MB, over the limit of 100 MB; raise the max size to 3072 MiB or"
+            + " split the export",
         e.getMessage());
+    assertEquals(java.util.Optional.of("max size"), e.problem().setting());
   }
 
   @Test
@@ -64,8 +65,8 @@ class SurveyReaderTest {
                 SurveyReader.readBytes(
                     "x.csv", bytes, ImportSettings.builder().maxBytes(1000).get()));
     assertEquals(
-        "x.csv: file is 2,500 bytes, over the limit of 1,000 bytes; raise the limit with --max-mb 1"
-            + " or split the export",
+        "x.csv: file is 2,500 bytes, over the limit of 1,000 bytes; raise the max size to 1 MiB or"
+            + " split the export",
         e.getMessage());
   }
 
@@ -242,8 +243,8 @@ class SurveyReaderTest {
             UnreadableInputException.class, () -> Csv.read(Csv.lines(HEADER, good, bad, bad)));
     assertEquals(
         "test.csv: 2 of 3 rows have a different number of fields than the header, which has 4 with"
-            + " the delimiter comma (detected); the delimiter is probably wrong: set it with"
-            + " --delimiter (comma, semicolon, tab or pipe)",
+            + " the delimiter comma (detected); the delimiter is probably wrong: set it (comma,"
+            + " semicolon, tab or pipe)",
         e.getMessage());
   }
 
@@ -324,10 +325,11 @@ class SurveyReaderTest {
             () -> Csv.read(Csv.lines(HEADER, "R1,2024-03-02," + answer(1) + ",mobile"), s));
     assertEquals(1, e.problem().line());
     assertEquals(
-        "no column named 'Q9' (--text-column); the header has: 'id', 'date', 'What almost stopped"
-            + " you from buying?', 'device'; check the name, or the --delimiter option if this list"
+        "no column named 'Q9' (the text column); the header has: 'id', 'date', 'What almost"
+            + " stopped you from buying?', 'device'; check the name, or the delimiter if this list"
             + " looks wrong",
         e.problem().message());
+    assertEquals(java.util.Optional.of("text column"), e.problem().setting());
   }
 
   @Test

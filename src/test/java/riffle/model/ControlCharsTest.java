@@ -28,10 +28,9 @@ class ControlCharsTest {
     assertEquals(
         "Caf\u00e9 cr\u00e8me \uD83D\uDE80",
         ControlChars.checkName("the code name", "Caf\u00e9 cr\u00e8me \uD83D\uDE80"));
-    IllegalArgumentException esc =
+    InputException esc =
         assertThrows(
-            IllegalArgumentException.class,
-            () -> ControlChars.checkName("the code name", "Price\u001B[2J"));
+            InputException.class, () -> ControlChars.checkName("the code name", "Price\u001B[2J"));
     assertEquals(
         "the code name \"Price\\u001B[2J\" holds the control character \\u001B at character 6;"
             + " a name is one line of ordinary characters: give it without that one",

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import riffle.model.InputException;
 
 class PhraseSettingsTest {
 
@@ -37,7 +38,7 @@ class PhraseSettingsTest {
   }
 
   private static void assertMessage(String option, Runnable build) {
-    IllegalArgumentException e = assertThrows(IllegalArgumentException.class, build::run);
+    InputException e = assertThrows(InputException.class, build::run);
     assertTrue(e.getMessage().startsWith(option), e.getMessage());
   }
 }

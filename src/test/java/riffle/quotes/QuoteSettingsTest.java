@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import riffle.model.InputException;
 
 class QuoteSettingsTest {
   @Test
@@ -70,6 +71,6 @@ class QuoteSettingsTest {
   }
 
   private static String message(QuoteSettings.Builder b) {
-    return assertThrows(IllegalArgumentException.class, b::get).getMessage();
+    return assertThrows(InputException.class, b::get).getMessage();
   }
 }

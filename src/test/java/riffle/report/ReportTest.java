@@ -15,6 +15,7 @@ import org.junit.jupiter.api.Test;
 import riffle.model.CodeFrequency;
 import riffle.model.Cooccurrence;
 import riffle.model.Findings;
+import riffle.model.InputException;
 import riffle.model.QuestionFindings;
 import riffle.model.Saturation;
 import riffle.model.Share;
@@ -176,7 +177,7 @@ class ReportTest {
     assertTrue(
         changes.stream().allMatch(c -> c.from().equals("Spring") && c.to().equals("Autumn")));
     assertThrows(
-        IllegalArgumentException.class,
+        InputException.class,
         () ->
             Report.compute(survey.input(), ReportSettings.DEFAULTS.comparing("Spring", "Winter")));
   }

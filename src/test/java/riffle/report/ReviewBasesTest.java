@@ -13,6 +13,7 @@ import java.util.OptionalLong;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
 import riffle.model.CodeFrequency;
+import riffle.model.InputException;
 import riffle.model.NotCompared;
 import riffle.model.QuestionFindings;
 import riffle.model.SegmentFindings;
@@ -186,9 +187,9 @@ class ReviewBasesTest {
     assertEquals(7, mobile.bases().get("W1"));
     assertEquals(5, row(mobile, "fit").waves().get("W1").count());
     assertEquals(3, row(q.segments().get(2), "fit").waves().get("W1").count());
-    IllegalArgumentException e =
+    InputException e =
         assertThrows(
-            IllegalArgumentException.class,
+            InputException.class,
             () -> compute(List.of("W1"), ReportSettings.DEFAULTS.withSegment("plan")));
     assertTrue(e.getMessage().contains("\"plan\""), e.getMessage());
   }

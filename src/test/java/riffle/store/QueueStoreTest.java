@@ -17,6 +17,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import riffle.model.Assignment;
+import riffle.model.InputException;
 import riffle.model.Origin;
 import riffle.model.Progress;
 import riffle.model.ReviewQueue;
@@ -94,7 +95,7 @@ class QueueStoreTest {
           "segments match regardless of case");
       assertEquals(2, store.queues().size());
       assertThrows(
-          IllegalArgumentException.class,
+          InputException.class,
           () -> store.startQueue("Wave 9", ProjectStoreTest.Q2, "", "", 1, "ana"));
       assertThrows(
           ProjectFileException.class,

@@ -18,6 +18,7 @@ import java.util.regex.Pattern;
 import opennlp.tools.langdetect.LanguageDetectorModel;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import riffle.model.InputException;
 import riffle.text.LanguageCheck.Verdict;
 
 /**
@@ -467,8 +468,8 @@ class LanguageCheckTest {
 
   @Test
   void anAnalysisLanguageTheModelDoesNotKnowIsRefused() {
-    IllegalArgumentException e =
-        assertThrows(IllegalArgumentException.class, () -> new LanguageCheck(model, "english"));
+    InputException e =
+        assertThrows(InputException.class, () -> new LanguageCheck(model, "english"));
     assertEquals(
         "unknown analysis language 'english'; give an ISO 639-3 code the language model knows,"
             + " such as eng",

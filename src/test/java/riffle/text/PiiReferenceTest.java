@@ -13,6 +13,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
+import riffle.model.InputException;
 import riffle.model.PiiType;
 
 /** Order, invoice and tracking references: the default patterns and an analyst's own. */
@@ -109,23 +110,21 @@ class PiiReferenceTest {
 
   @Test
   void refusesAnInvalidPatternNamingItAndWhereItIsWrong() {
-    IllegalArgumentException e =
+    InputException e =
         assertThrows(
-            IllegalArgumentException.class,
+            InputException.class,
             () -> PiiMasker.withReferencePatterns(List.of("ORD-\\d+", "INV-(\\d+")));
     assertEquals(
         "reference pattern 2 of 2, \"INV-(\\d+\", is not a valid regular expression: "
             + "Unclosed group at the end of the pattern",
         e.getMessage());
-    IllegalArgumentException bad =
+    InputException bad =
         assertThrows(
-            IllegalArgumentException.class,
-            () -> PiiMasker.withReferencePatterns(List.of("ORD-[0-9")));
+            InputException.class, () -> PiiMasker.withReferencePatterns(List.of("ORD-[0-9")));
     assertTrue(
         bad.getMessage().startsWith("reference pattern 1 of 1, \"ORD-[0-9\""), bad.getMessage());
-    IllegalArgumentException star =
-        assertThrows(
-            IllegalArgumentException.class, () -> PiiMasker.withReferencePatterns(List.of("*ORD")));
+    InputException star =
+        assertThrows(InputException.class, () -> PiiMasker.withReferencePatterns(List.of("*ORD")));
     assertEquals(
         "reference pattern 1 of 1, \"*ORD\", is not a valid regular expression: "
             + "Dangling meta character '*' at character 1 ('*')",
@@ -137,12 +136,10 @@ class PiiReferenceTest {
     List<String> withNull = new ArrayList<>(Arrays.asList("ORD-\\d+", null));
     assertEquals(
         "reference pattern 2 of 2 is empty; give a regular expression",
-        assertThrows(
-                IllegalArgumentException.class, () -> PiiMasker.withReferencePatterns(withNull))
+        assertThrows(InputException.class, () -> PiiMasker.withReferencePatterns(withNull))
             .getMessage());
-    assertThrows(
-        IllegalArgumentException.class, () -> PiiMasker.withReferencePatterns(List.of("")));
-    assertThrows(IllegalArgumentException.class, () -> PiiMasker.withReferencePatterns(null));
+    assertThrows(InputException.class, () -> PiiMasker.withReferencePatterns(List.of("")));
+    assertThrows(InputException.class, () -> PiiMasker.withReferencePatterns(null));
   }
 
   @Test

@@ -29,6 +29,7 @@ import org.junit.jupiter.api.io.TempDir;
 import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
 import riffle.app.Project;
+import riffle.model.InputException;
 import riffle.model.Progress;
 
 /** The API as the page meets it: a real server on port 0, a real project, plain HTTP. */
@@ -497,17 +498,29 @@ class WebServerTest {
   }
 
   @Test
+  void aBrokenInvariantIsAFaultOfRiffleAndASettingIsNamedAsSuch() {
+    Errors.Failure bug = Errors.of(new IllegalArgumentException("counts must not be negative"));
+    assertEquals(500, bug.status(), "a bug is not the person's bad input");
+    assertFalse(bug.body().get("error").toString().contains("negative"));
+    Errors.Failure wave =
+        Errors.of(new riffle.model.SettingException("wave", "no wave named \"Spring\""));
+    assertEquals(400, wave.status());
+    assertEquals("no wave named \"Spring\"", wave.body().get("error"));
+    assertEquals(java.util.Map.of("setting", "wave"), wave.body().get("where"));
+    assertEquals(400, Errors.of(new riffle.model.InputException("a code needs a name")).status());
+  }
+
+  @Test
   void aWebFolderWithoutAPageIsRefused() throws Exception {
     Path empty = Files.createDirectories(dir.resolve("empty-web"));
-    IllegalArgumentException e =
+    InputException e =
         assertThrows(
-            IllegalArgumentException.class,
+            InputException.class,
             () ->
                 WebServer.start(
                     dir.resolve("x.riffle"), WebServer.Options.defaults().webDir(empty)));
     assertTrue(e.getMessage().contains("index.html"));
-    assertThrows(
-        IllegalArgumentException.class, () -> WebServer.Options.defaults().at("127.0.0.1", 70000));
+    assertThrows(InputException.class, () -> WebServer.Options.defaults().at("127.0.0.1", 70000));
   }
 
   @Test
