@@ -1,3 +1,4 @@
+// Kept whole though over 400 lines: one flow (source, preview, roles, import) over shared state, no clean seam.
 // Bringing in a wave: a file or pasted cells, a preview of how they were read, the column roles
 // to check and change, the wave's name and date, then the import with its progress and problems.
 import { api, ApiError } from './api.js';

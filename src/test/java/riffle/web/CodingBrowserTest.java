@@ -271,6 +271,21 @@ class CodingBrowserTest {
 
     // "Read, no code applies" is a key of its own (shown with the keys); again takes it back.
     assertTrue(text("#coding-keyhelp").contains("read: no (other) code applies"));
+    WebElement help = driver.findElement(By.id("coding-keyhelp"));
+    js("arguments[0].scrollIntoView()", help);
+    Files.write(SHOTS.resolve("coding-keys.png"), help.getScreenshotAs(OutputType.BYTES));
+    js("window.scrollTo(0, 0)");
+    // Each key's explanation has room to read on a line or two: at least about 12em wide.
+    @SuppressWarnings("unchecked")
+    List<Number> widths =
+        (List<Number>)
+            js(
+                "return [...document.querySelectorAll('#coding-keyhelp dd')].map(d =>"
+                    + " d.getBoundingClientRect().width / parseFloat(getComputedStyle(d).fontSize))");
+    assertTrue(!widths.isEmpty(), "the Keys panel lists its keys");
+    for (Number w : widths) {
+      assertTrue(w.doubleValue() >= 11.9, "a key's explanation is " + w + "em wide: " + widths);
+    }
     keys(".");
     waiting().until(d -> text("#coding-codes").contains("read: no code applies"));
     waiting().until(d -> text("#coding-progress").startsWith("Read 10 of 12"));
