@@ -72,7 +72,7 @@ public final class Report {
   public static Findings compute(ReportInput input, ReportSettings settings) {
     Objects.requireNonNull(input, "input");
     Objects.requireNonNull(settings, "settings");
-    Codebook codebook = new Codebook(input.codebook());
+    CodeBits codebook = new CodeBits(input.codebook());
     List<String> waves = input.waves();
     Map<String, Integer> waveIndex = index(waves);
     Map<String, List<ReportAnswer>> byQuestion = new LinkedHashMap<>();
@@ -188,7 +188,7 @@ public final class Report {
   private static final class Question {
     final String question;
     final List<ReportAnswer> answers;
-    final Codebook codebook;
+    final CodeBits codebook;
     final List<String> allWaves;
     final Map<String, Integer> allIndex;
     final boolean[][] ruleRan;
@@ -205,7 +205,7 @@ public final class Report {
     Question(
         String question,
         List<ReportAnswer> answers,
-        Codebook codebook,
+        CodeBits codebook,
         List<String> allWaves,
         Map<String, Integer> allIndex,
         boolean[][] ruleRan,
@@ -673,7 +673,7 @@ public final class Report {
    * read answers.
    */
   private static final class Tally {
-    final Codebook codebook;
+    final CodeBits codebook;
     final int[] answers;
     final int[] nonAnswers;
     final int[] read;
@@ -697,7 +697,7 @@ public final class Report {
     private final long[] personBits;
     private final int[] present;
 
-    Tally(Codebook codebook, int waves, int pairScopes) {
+    Tally(CodeBits codebook, int waves, int pairScopes) {
       this.codebook = codebook;
       int codes = codebook.size();
       answers = new int[waves];
