@@ -54,7 +54,7 @@ final class DemoCommand implements Callable<Integer> {
     DemoProject.Result result = DemoProject.prepare(folder, TerminalProgress.forStderr());
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, result);
+      JsonOutput.print(out, result);
       return serve(result, spec.commandLine().getErr());
     }
     if (result.reused()) {

@@ -33,7 +33,7 @@ final class InfoCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, summary);
+      JsonOutput.print(out, summary);
     } else {
       Summaries.print(out, project, summary);
     }

@@ -91,7 +91,7 @@ final class ReportCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, findings);
+      JsonOutput.print(out, findings);
       return 0;
     }
     for (QuestionFindings q : findings.questions()) {

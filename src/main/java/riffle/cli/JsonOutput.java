@@ -9,10 +9,10 @@ import java.io.PrintWriter;
  * The command line's JSON: Riffle's one JSON style ({@link riffle.web.Json#style}: snake_case keys,
  * ISO dates, lower-case enum values, an absent optional value as null), indented.
  */
-final class Json {
+final class JsonOutput {
   static final ObjectMapper MAPPER = mapper();
 
-  private Json() {}
+  private JsonOutput() {}
 
   private static ObjectMapper mapper() {
     return riffle.web.Json.style().enable(SerializationFeature.INDENT_OUTPUT).build();
