@@ -35,7 +35,7 @@ final class InfoCommand implements Callable<Integer> {
     if (json.enabled) {
       JsonOutput.print(out, summary);
     } else {
-      Summaries.print(out, project, summary);
+      SummaryText.print(out, project, summary);
     }
     return 0;
   }
