@@ -137,7 +137,7 @@ final class ExportCommand implements Callable<Integer> {
     } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
       throw new IllegalStateException("cannot write JSON: " + e.getMessage(), e);
     }
-    Files.write(out, text);
+    OutputFiles.write(out, text);
     PrintWriter w = spec.commandLine().getOut();
     EditOutcome done = new EditOutcome(0, "export", 0, 0, "Wrote " + out + ".");
     if (json.enabled) {
