@@ -45,7 +45,7 @@ class ArchitectureTest {
                   "quotes", "store", "csv", "words")),
           Map.entry("web", Set.of("app", "model")),
           // cli starts the web server for `serve` and `demo` (WebServer) and shares its JSON style
-          // (Json).
+          // (ApiJson).
           Map.entry("cli", Set.of("app", "model", "web")));
 
   /** Libraries the JDK-only packages may not touch. */

@@ -110,7 +110,7 @@ public final class CodebookEditor {
           for (long a : answers) {
             Coding.answerText(e, a);
           }
-          e.putCode(c.withExamples(List.copyOf(new LinkedHashSet<>(answers))));
+          e.putCode(c.toBuilder().examples(List.copyOf(new LinkedHashSet<>(answers))).build());
           return "\""
               + c.name()
               + "\" has "
@@ -126,7 +126,7 @@ public final class CodebookEditor {
         archived ? "archive-code" : "restore-code",
         e -> {
           Code c = Codebook.byId(e.codes(), codeId);
-          e.putCode(c.withArchived(archived));
+          e.putCode(c.toBuilder().archived(archived).build());
           return (archived ? "Archived \"" : "Brought back \"") + c.name() + "\".";
         });
   }
@@ -144,7 +144,7 @@ public final class CodebookEditor {
           Code c = Codebook.byId(book, codeId);
           int uses = e.assignmentsOfCode(codeId).size();
           if (uses > 0) {
-            e.putCode(c.withArchived(true));
+            e.putCode(c.toBuilder().archived(true).build());
             return "Archived \""
                 + c.name()
                 + "\" instead of deleting it: "
@@ -152,7 +152,7 @@ public final class CodebookEditor {
                 + " answer(s) carry it.";
           }
           for (Code child : Codebook.children(book, codeId)) {
-            e.putCode(child.withParent(OptionalLong.empty()));
+            e.putCode(child.toBuilder().parent(OptionalLong.empty()).build());
           }
           dropRulesAndRemovals(e, codeId);
           e.removeCode(codeId);
@@ -172,7 +172,7 @@ public final class CodebookEditor {
           book.add(Math.max(0, Math.min(book.size(), place - 1)), c);
           for (int i = 0; i < book.size(); i++) {
             if (book.get(i).position() != i + 1) {
-              e.putCode(book.get(i).withPosition(i + 1));
+              e.putCode(book.get(i).toBuilder().position(i + 1).build());
             }
           }
           return "Moved \"" + c.name() + "\" to place " + (book.indexOf(c) + 1) + ".";
@@ -224,7 +224,7 @@ public final class CodebookEditor {
                       + "\" is not a theme; merge into a top-level code");
             }
             for (Code child : children) {
-              e.putCode(child.withParent(OptionalLong.of(targetId)));
+              e.putCode(child.toBuilder().parent(OptionalLong.of(targetId)).build());
             }
             for (Assignment a : e.assignmentsOfCode(sourceId)) {
               if (e.assignment(a.answerId(), targetId).isPresent()) {
@@ -253,7 +253,10 @@ public final class CodebookEditor {
           if (names.isEmpty()) {
             throw new InputException("name at least one code to merge into another");
           }
-          e.putCode(Codebook.byId(e.codes(), targetId).withExamples(List.copyOf(examples)));
+          e.putCode(
+              Codebook.byId(e.codes(), targetId).toBuilder()
+                  .examples(List.copyOf(examples))
+                  .build());
           e.note("into", target.name());
           e.note("moved", moved);
           e.note("collapsed", collapsed);

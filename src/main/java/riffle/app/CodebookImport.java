@@ -60,12 +60,14 @@ final class CodebookImport {
                   Optional<Code> have = Codebook.find(book, d.name().orElseThrow());
                   if (have.isEmpty()) {
                     e.putCode(
-                        Codebook.create(book, fields, e.newCodeId()).withArchived(r.archived()));
+                        Codebook.create(book, fields, e.newCodeId()).toBuilder()
+                            .archived(r.archived())
+                            .build());
                     created++;
                   } else {
                     Code next = Codebook.change(book, have.get(), fields);
                     if (pass == 0) {
-                      next = next.withArchived(r.archived());
+                      next = next.toBuilder().archived(r.archived()).build();
                     }
                     if (!next.equals(have.get())) {
                       e.putCode(next);

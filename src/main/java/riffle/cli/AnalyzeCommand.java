@@ -35,7 +35,7 @@ final class AnalyzeCommand implements Callable<Integer> {
     Analysis a = Analyses.analyze(text);
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, a);
+      JsonOutput.print(out, a);
       return 0;
     }
     out.printf(Locale.ROOT, "language: %s%s%n", a.language(), a.foreign() ? " (not analysed)" : "");

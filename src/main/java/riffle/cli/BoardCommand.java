@@ -64,7 +64,7 @@ final class BoardCommand implements Callable<Integer> {
       doc.put("title", board.title());
       doc.put("slots", board.slots());
       doc.put("taken_off", takenOff);
-      Json.print(out, doc);
+      JsonOutput.print(out, doc);
       return 0;
     }
     out.println(CopyBoard.CONSENT_NOTICE);

@@ -83,7 +83,7 @@ final class CodesCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, Map.of("codes", listed));
+      JsonOutput.print(out, Map.of("codes", listed));
       return 0;
     }
     if (listed.isEmpty()) {

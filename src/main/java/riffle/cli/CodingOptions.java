@@ -29,7 +29,7 @@ final class CodingOptions {
   /** Prints what a change did: its sentence, or the outcome as JSON. */
   void print(PrintWriter out, EditOutcome outcome) {
     if (json.enabled) {
-      Json.print(out, outcome);
+      JsonOutput.print(out, outcome);
     } else {
       out.println(outcome.message());
     }

@@ -54,7 +54,7 @@ final class DemoCommand implements Callable<Integer> {
     DemoProject.Result result = DemoProject.prepare(folder, TerminalProgress.forStderr());
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, result);
+      JsonOutput.print(out, result);
       return serve(result, spec.commandLine().getErr());
     }
     if (result.reused()) {
@@ -71,7 +71,7 @@ final class DemoCommand implements Callable<Integer> {
             r.problems().size());
       }
     }
-    Summaries.print(out, result.project(), result.summary());
+    SummaryText.print(out, result.project(), result.summary());
     out.printf(
         Locale.ROOT,
         "%nTry:%n  riffle phrases --project %1$s --question 1%n"

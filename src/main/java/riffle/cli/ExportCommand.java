@@ -110,7 +110,7 @@ final class ExportCommand implements Callable<Integer> {
                       p.reporting()
                           .markdown(p.reporting().findings(findings), "Findings — " + title);
                   case JSON ->
-                      Json.MAPPER
+                      JsonOutput.MAPPER
                               .writerWithDefaultPrettyPrinter()
                               .writeValueAsString(p.reporting().findings(findings))
                           + "\n";
@@ -123,7 +123,7 @@ final class ExportCommand implements Callable<Integer> {
                   case TXT -> p.quotes().exportBoard("txt");
                   case CSV -> (bom ? "\uFEFF" : "") + p.quotes().exportBoard("csv");
                   case JSON ->
-                      Json.MAPPER
+                      JsonOutput.MAPPER
                               .writerWithDefaultPrettyPrinter()
                               .writeValueAsString(p.quotes().board())
                           + "\n";
@@ -134,11 +134,11 @@ final class ExportCommand implements Callable<Integer> {
     } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
       throw new IllegalStateException("cannot write JSON: " + e.getMessage(), e);
     }
-    Files.write(out, text);
+    OutputFiles.write(out, text);
     PrintWriter w = spec.commandLine().getOut();
     EditOutcome done = new EditOutcome(0, "export", 0, 0, "Wrote " + out + ".");
     if (json.enabled) {
-      Json.print(w, done);
+      JsonOutput.print(w, done);
     } else {
       w.println(done.message());
     }

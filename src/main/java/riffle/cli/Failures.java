@@ -87,7 +87,7 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
         error.put("column", p.column());
         error.put("message", p.message());
       }
-      Json.print(cl.getOut(), Map.of("error", error));
+      JsonOutput.print(cl.getOut(), Map.of("error", error));
     }
     return badInput ? BAD_INPUT : INTERNAL;
   }

@@ -46,7 +46,7 @@ final class HistoryCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, Map.of("history", entries));
+      JsonOutput.print(out, Map.of("history", entries));
       return 0;
     }
     for (HistoryEntry e : entries) {

@@ -167,7 +167,7 @@ final class ImportCommand implements Callable<Integer> {
     ImportReport report = Project.importInto(project, request.get(), TerminalProgress.forStderr());
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, report);
+      JsonOutput.print(out, report);
     } else {
       print(out, report);
     }

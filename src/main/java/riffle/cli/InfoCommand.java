@@ -33,9 +33,9 @@ final class InfoCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, summary);
+      JsonOutput.print(out, summary);
     } else {
-      Summaries.print(out, project, summary);
+      SummaryText.print(out, project, summary);
     }
     return 0;
   }

@@ -81,7 +81,7 @@ final class PhrasesCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, found);
+      JsonOutput.print(out, found);
       return 0;
     }
     out.printf(Locale.ROOT, "%d answers mined%n%n", found.answers());

@@ -51,7 +51,7 @@ final class QueueCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, Map.of("queues", queues));
+      JsonOutput.print(out, Map.of("queues", queues));
       return 0;
     }
     if (queues.isEmpty()) {
@@ -130,7 +130,7 @@ final class QueueCommand implements Callable<Integer> {
       }
       PrintWriter out = spec.commandLine().getOut();
       if (json.enabled) {
-        Json.print(out, s);
+        JsonOutput.print(out, s);
         return 0;
       }
       ReviewQueue q = s.queue();
@@ -202,7 +202,7 @@ final class QueueCommand implements Callable<Integer> {
       }
       PrintWriter out = spec.commandLine().getOut();
       if (json.enabled) {
-        Json.print(out, page.get());
+        JsonOutput.print(out, page.get());
         return 0;
       }
       QueueStatus s = page.get().status();

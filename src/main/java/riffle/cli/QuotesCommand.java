@@ -60,7 +60,7 @@ final class QuotesCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, findings);
+      JsonOutput.print(out, findings);
       return 0;
     }
     out.println(CopyBoard.CONSENT_NOTICE);

@@ -83,15 +83,15 @@ final class ReportCommand implements Callable<Integer> {
       Reporting r = p.reporting();
       findings = r.findings(query);
       if (html != null) {
-        Files.write(html, r.html(findings, title));
+        OutputFiles.write(html, r.html(findings, title));
       }
       if (markdown != null) {
-        Files.write(markdown, r.markdown(findings, title));
+        OutputFiles.write(markdown, r.markdown(findings, title));
       }
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, findings);
+      JsonOutput.print(out, findings);
       return 0;
     }
     for (QuestionFindings q : findings.questions()) {

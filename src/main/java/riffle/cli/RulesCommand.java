@@ -62,7 +62,7 @@ final class RulesCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, Map.of("rules", rules));
+      JsonOutput.print(out, Map.of("rules", rules));
       return 0;
     }
     if (rules.isEmpty()) {
@@ -134,7 +134,7 @@ final class RulesCommand implements Callable<Integer> {
       }
       PrintWriter out = spec.commandLine().getOut();
       if (options.json.enabled) {
-        Json.print(out, preview);
+        JsonOutput.print(out, preview);
         return 0;
       }
       out.printf(

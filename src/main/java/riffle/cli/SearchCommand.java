@@ -66,7 +66,7 @@ final class SearchCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (json.enabled) {
-      Json.print(out, result);
+      JsonOutput.print(out, result);
       return 0;
     }
     out.printf(Locale.ROOT, "%d answers match", result.total());

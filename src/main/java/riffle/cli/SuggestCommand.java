@@ -60,7 +60,7 @@ final class SuggestCommand implements Callable<Integer> {
     }
     PrintWriter out = spec.commandLine().getOut();
     if (options.json.enabled) {
-      Json.print(
+      JsonOutput.print(
           out,
           accepted.isPresent()
               ? java.util.Map.of(

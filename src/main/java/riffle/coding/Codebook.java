@@ -97,21 +97,7 @@ public final class Codebook {
     if (draft.direction().isEmpty() && made.parent().isPresent()) {
       // A code under a theme says what its theme says unless told otherwise.
       Code theme = byId(book, made.parent().getAsLong());
-      made =
-          new Code(
-              made.id(),
-              made.name(),
-              made.description(),
-              made.include(),
-              made.exclude(),
-              made.colour(),
-              made.key(),
-              made.parent(),
-              theme.direction(),
-              made.archived(),
-              made.position(),
-              made.examples(),
-              made.imported());
+      made = made.toBuilder().direction(theme.direction()).build();
     }
     ControlChars.checkName("the code name", made.name());
     List<Code> after = new ArrayList<>(book);
@@ -149,22 +135,19 @@ public final class Codebook {
       String p = d.parent().get();
       parent = p.isBlank() ? OptionalLong.empty() : OptionalLong.of(named(book, p).id());
     }
-    return new Code(
-        c.id(),
-        d.name().map(String::strip).orElse(c.name()),
-        d.description().map(String::strip).orElse(c.description()),
-        d.include().map(String::strip).orElse(c.include()),
-        d.exclude().map(String::strip).orElse(c.exclude()),
-        d.colour().isPresent() ? blankToEmpty(d.colour().get()) : c.colour(),
-        d.key().isPresent()
-            ? blankToEmpty(d.key().get()).map(k -> k.toLowerCase(Locale.ROOT))
-            : c.key(),
-        parent,
-        d.direction().orElse(c.direction()),
-        c.archived(),
-        c.position(),
-        c.examples(),
-        c.imported());
+    return c.toBuilder()
+        .name(d.name().map(String::strip).orElse(c.name()))
+        .description(d.description().map(String::strip).orElse(c.description()))
+        .include(d.include().map(String::strip).orElse(c.include()))
+        .exclude(d.exclude().map(String::strip).orElse(c.exclude()))
+        .colour(d.colour().isPresent() ? blankToEmpty(d.colour().get()) : c.colour())
+        .key(
+            d.key().isPresent()
+                ? blankToEmpty(d.key().get()).map(k -> k.toLowerCase(Locale.ROOT))
+                : c.key())
+        .parent(parent)
+        .direction(d.direction().orElse(c.direction()))
+        .build();
   }
 
   private static Optional<String> blankToEmpty(String s) {

@@ -48,93 +48,120 @@ public record Code(
     examples = List.copyOf(examples);
   }
 
-  /** A copy with another name. */
-  public Code withName(String newName) {
-    return new Code(
-        id,
-        newName,
-        description,
-        include,
-        exclude,
-        colour,
-        key,
-        parent,
-        direction,
-        archived,
-        position,
-        examples,
-        imported);
+  /** A builder that starts from this code, to derive a changed copy; its id and origin stay. */
+  public Builder toBuilder() {
+    return new Builder(this);
   }
 
-  /** A copy under another theme, or at the top level. */
-  public Code withParent(OptionalLong newParent) {
-    return new Code(
-        id,
-        name,
-        description,
-        include,
-        exclude,
-        colour,
-        key,
-        newParent,
-        direction,
-        archived,
-        position,
-        examples,
-        imported);
-  }
+  /** Builds a changed copy of a code; {@link #build()} checks it like the constructor does. */
+  public static final class Builder {
+    private final long id;
+    private String name;
+    private String description;
+    private String include;
+    private String exclude;
+    private Optional<String> colour;
+    private Optional<String> key;
+    private OptionalLong parent;
+    private Direction direction;
+    private boolean archived;
+    private int position;
+    private List<Long> examples;
+    private final boolean imported;
 
-  /** A copy archived or brought back; an archived code gives up its key. */
-  public Code withArchived(boolean newArchived) {
-    return new Code(
-        id,
-        name,
-        description,
-        include,
-        exclude,
-        colour,
-        newArchived ? Optional.empty() : key,
-        parent,
-        direction,
-        newArchived,
-        position,
-        examples,
-        imported);
-  }
+    private Builder(Code c) {
+      id = c.id;
+      name = c.name;
+      description = c.description;
+      include = c.include;
+      exclude = c.exclude;
+      colour = c.colour;
+      key = c.key;
+      parent = c.parent;
+      direction = c.direction;
+      archived = c.archived;
+      position = c.position;
+      examples = c.examples;
+      imported = c.imported;
+    }
 
-  /** A copy at another place in the order. */
-  public Code withPosition(int newPosition) {
-    return new Code(
-        id,
-        name,
-        description,
-        include,
-        exclude,
-        colour,
-        key,
-        parent,
-        direction,
-        archived,
-        newPosition,
-        examples,
-        imported);
-  }
+    public Builder name(String v) {
+      name = v;
+      return this;
+    }
 
-  /** A copy with other example answers. */
-  public Code withExamples(List<Long> newExamples) {
-    return new Code(
-        id,
-        name,
-        description,
-        include,
-        exclude,
-        colour,
-        key,
-        parent,
-        direction,
-        archived,
-        position,
-        newExamples,
-        imported);
+    public Builder description(String v) {
+      description = v;
+      return this;
+    }
+
+    public Builder include(String v) {
+      include = v;
+      return this;
+    }
+
+    public Builder exclude(String v) {
+      exclude = v;
+      return this;
+    }
+
+    public Builder colour(Optional<String> v) {
+      colour = v;
+      return this;
+    }
+
+    public Builder key(Optional<String> v) {
+      key = v;
+      return this;
+    }
+
+    /** Under another theme, or at the top level when empty. */
+    public Builder parent(OptionalLong v) {
+      parent = v;
+      return this;
+    }
+
+    public Builder direction(Direction v) {
+      direction = v;
+      return this;
+    }
+
+    /** Archived or brought back; archiving also gives up the key. */
+    public Builder archived(boolean v) {
+      archived = v;
+      if (v) {
+        key = Optional.empty();
+      }
+      return this;
+    }
+
+    /** Another place in the codebook's order. */
+    public Builder position(int v) {
+      position = v;
+      return this;
+    }
+
+    /** Other example answers. */
+    public Builder examples(List<Long> v) {
+      examples = v;
+      return this;
+    }
+
+    public Code build() {
+      return new Code(
+          id,
+          name,
+          description,
+          include,
+          exclude,
+          colour,
+          key,
+          parent,
+          direction,
+          archived,
+          position,
+          examples,
+          imported);
+    }
   }
 }

@@ -49,20 +49,83 @@ public record CodeDraft(
         Optional.empty());
   }
 
-  /** A copy with a parent theme. */
-  public CodeDraft withParent(String theme) {
-    return new CodeDraft(
-        name, description, include, exclude, colour, key, Optional.of(theme), direction);
+  /** A builder that starts from this draft, to derive a changed copy. */
+  public Builder toBuilder() {
+    return new Builder(this);
   }
 
-  /** A copy with a key. */
-  public CodeDraft withKey(String k) {
-    return new CodeDraft(
-        name, description, include, exclude, colour, Optional.of(k), parent, direction);
-  }
+  /** Builds a changed copy of a draft. */
+  public static final class Builder {
+    private Optional<String> name;
+    private Optional<String> description;
+    private Optional<String> include;
+    private Optional<String> exclude;
+    private Optional<String> colour;
+    private Optional<String> key;
+    private Optional<String> parent;
+    private Optional<Direction> direction;
 
-  /** A copy with a direction. */
-  public CodeDraft withDirection(Direction d) {
-    return new CodeDraft(name, description, include, exclude, colour, key, parent, Optional.of(d));
+    private Builder(CodeDraft d) {
+      name = d.name;
+      description = d.description;
+      include = d.include;
+      exclude = d.exclude;
+      colour = d.colour;
+      key = d.key;
+      parent = d.parent;
+      direction = d.direction;
+    }
+
+    /** The name. */
+    public Builder name(String v) {
+      name = Optional.of(v);
+      return this;
+    }
+
+    /** A short description. */
+    public Builder description(String v) {
+      description = Optional.of(v);
+      return this;
+    }
+
+    /** Guidance on what belongs under it. */
+    public Builder include(String v) {
+      include = Optional.of(v);
+      return this;
+    }
+
+    /** Guidance on what does not. */
+    public Builder exclude(String v) {
+      exclude = Optional.of(v);
+      return this;
+    }
+
+    /** A hex colour such as {@code #3a7d44}; an empty one clears it. */
+    public Builder colour(String v) {
+      colour = Optional.of(v);
+      return this;
+    }
+
+    /** The keyboard key that toggles it; an empty one clears it. */
+    public Builder key(String v) {
+      key = Optional.of(v);
+      return this;
+    }
+
+    /** The name of its theme; an empty one puts it at the top level. */
+    public Builder parent(String v) {
+      parent = Optional.of(v);
+      return this;
+    }
+
+    /** Praise, friction or neutral. */
+    public Builder direction(Direction v) {
+      direction = Optional.of(v);
+      return this;
+    }
+
+    public CodeDraft build() {
+      return new CodeDraft(name, description, include, exclude, colour, key, parent, direction);
+    }
   }
 }

@@ -16,7 +16,7 @@ final class CodedCsv {
   private CodedCsv() {}
 
   static String wide(CodedExport export, boolean withBom) {
-    Codebook codebook = new Codebook(export.codebook());
+    CodeBits codebook = new CodeBits(export.codebook());
     Set<String> metaKeys = new TreeSet<>();
     for (ExportAnswer a : export.answers()) {
       metaKeys.addAll(a.metadata().keySet());
@@ -65,7 +65,7 @@ final class CodedCsv {
   }
 
   /** Code names as column headers; a name used twice gets its id in brackets. */
-  private static List<String> codeHeaders(Codebook codebook) {
+  private static List<String> codeHeaders(CodeBits codebook) {
     Map<String, Integer> uses = new HashMap<>();
     for (ReportCode c : codebook.codes) {
       uses.merge(c.name(), 1, Integer::sum);

@@ -37,7 +37,7 @@ import riffle.stats.Proportions;
 final class QuestionReport {
   final String question;
   final List<ReportAnswer> answers;
-  final Codebook codebook;
+  final CodeBits codebook;
   final List<String> allWaves;
   final Map<String, Integer> allIndex;
   final boolean[][] ruleRan;
@@ -54,7 +54,7 @@ final class QuestionReport {
   QuestionReport(
       String question,
       List<ReportAnswer> answers,
-      Codebook codebook,
+      CodeBits codebook,
       List<String> allWaves,
       Map<String, Integer> allIndex,
       boolean[][] ruleRan,

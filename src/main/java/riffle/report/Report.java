@@ -60,7 +60,7 @@ public final class Report {
   public static Findings compute(ReportInput input, ReportSettings settings) {
     Objects.requireNonNull(input, "input");
     Objects.requireNonNull(settings, "settings");
-    Codebook codebook = new Codebook(input.codebook());
+    CodeBits codebook = new CodeBits(input.codebook());
     List<String> waves = input.waves();
     Map<String, Integer> waveIndex = index(waves);
     Map<String, List<ReportAnswer>> byQuestion = new LinkedHashMap<>();

@@ -9,7 +9,7 @@ import riffle.model.Coverage;
  * answers.
  */
 final class Tally {
-  final Codebook codebook;
+  final CodeBits codebook;
   final int[] answers;
   final int[] nonAnswers;
   final int[] read;
@@ -33,7 +33,7 @@ final class Tally {
   private final long[] personBits;
   private final int[] present;
 
-  Tally(Codebook codebook, int waves, int pairScopes) {
+  Tally(CodeBits codebook, int waves, int pairScopes) {
     this.codebook = codebook;
     int codes = codebook.size();
     answers = new int[waves];

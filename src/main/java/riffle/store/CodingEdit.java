@@ -127,12 +127,12 @@ public final class CodingEdit {
 
   /** An id no code has. */
   public long newCodeId() throws ProjectFileException {
-    return read(() -> Summaries.number(c, "SELECT coalesce(max(id), 0) + 1 FROM code"));
+    return read(() -> SummaryQueries.number(c, "SELECT coalesce(max(id), 0) + 1 FROM code"));
   }
 
   /** An id no rule has. */
   public long newRuleId() throws ProjectFileException {
-    return read(() -> Summaries.number(c, "SELECT coalesce(max(id), 0) + 1 FROM code_rule"));
+    return read(() -> SummaryQueries.number(c, "SELECT coalesce(max(id), 0) + 1 FROM code_rule"));
   }
 
   // ---- writes ----
@@ -295,7 +295,7 @@ public final class CodingEdit {
 
   /** An id no board item has. */
   public long newBoardItemId() throws ProjectFileException {
-    return read(() -> Summaries.number(c, "SELECT coalesce(max(id), 0) + 1 FROM board_item"));
+    return read(() -> SummaryQueries.number(c, "SELECT coalesce(max(id), 0) + 1 FROM board_item"));
   }
 
   /** Pins or updates a board item. */

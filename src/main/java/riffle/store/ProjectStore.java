@@ -161,7 +161,7 @@ public final class ProjectStore implements AutoCloseable {
   }
 
   static int pragmaInt(Connection c, String pragma) throws SQLException {
-    return Summaries.count(c, "PRAGMA " + pragma);
+    return SummaryQueries.count(c, "PRAGMA " + pragma);
   }
 
   /** The schema version of the open file. */
@@ -190,7 +190,7 @@ public final class ProjectStore implements AutoCloseable {
 
   /** How many waves the project holds. */
   public int waveCount() throws ProjectFileException {
-    return read(c -> Summaries.count(c, "SELECT count(*) FROM wave"));
+    return read(c -> SummaryQueries.count(c, "SELECT count(*) FROM wave"));
   }
 
   /** Stores one import in a single transaction: all of it, or (on any failure) nothing. */
@@ -342,12 +342,12 @@ public final class ProjectStore implements AutoCloseable {
 
   /** The newest answer's id, or 0 in an empty project. */
   public long lastAnswerId() throws ProjectFileException {
-    return read(c -> Summaries.number(c, "SELECT coalesce(max(id), 0) FROM answer"));
+    return read(c -> SummaryQueries.number(c, "SELECT coalesce(max(id), 0) FROM answer"));
   }
 
   /** The questions, in the order first seen. */
   public List<String> questions() throws ProjectFileException {
-    return read(Summaries::questions);
+    return read(SummaryQueries::questions);
   }
 
   /**
@@ -402,7 +402,7 @@ public final class ProjectStore implements AutoCloseable {
 
   /** Counts for the whole project. */
   public ProjectSummary summary() throws ProjectFileException {
-    return read(Summaries::summary);
+    return read(SummaryQueries::summary);
   }
 
   /**
@@ -592,7 +592,7 @@ public final class ProjectStore implements AutoCloseable {
 
   /** The newest edit's id, or 0. */
   public long lastEditId() throws ProjectFileException {
-    return read(c -> Summaries.number(c, "SELECT coalesce(max(id), 0) FROM edit"));
+    return read(c -> SummaryQueries.number(c, "SELECT coalesce(max(id), 0) FROM edit"));
   }
 
   /**
@@ -602,7 +602,7 @@ public final class ProjectStore implements AutoCloseable {
   public Set<Long> answersTouchedSince(long editId) throws ProjectFileException {
     return read(
         c ->
-            Summaries.ids(
+            SummaryQueries.ids(
                 c,
                 "SELECT answer_id FROM edit_step WHERE edit_id > ?1 AND answer_id IS NOT NULL"
                     + " UNION SELECT a.answer_id FROM assignment a WHERE a.code_id IN (SELECT"

@@ -44,7 +44,7 @@ final class CodebookRoutes {
   }
 
   void createCode(Context ctx) throws Exception {
-    CodeBody body = Json.body(ctx, CodeBody.class);
+    CodeBody body = ApiJson.body(ctx, CodeBody.class);
     String coder = Requests.coder(body.coder());
     if (body.name().map(String::isBlank).orElse(true)) {
       throw ApiError.badField("name", "give the new code a name");
@@ -55,7 +55,7 @@ final class CodebookRoutes {
 
   void changeCode(Context ctx) throws Exception {
     long id = Requests.idParam(ctx);
-    CodeBody body = Json.body(ctx, CodeBody.class);
+    CodeBody body = ApiJson.body(ctx, CodeBody.class);
     String coder = Requests.coder(body.coder());
     Code changed =
         access.call(
@@ -68,7 +68,7 @@ final class CodebookRoutes {
 
   void archiveCode(Context ctx) throws Exception {
     long id = Requests.idParam(ctx);
-    ArchiveBody body = Json.body(ctx, ArchiveBody.class);
+    ArchiveBody body = ApiJson.body(ctx, ArchiveBody.class);
     String coder = Requests.coder(body.coder());
     boolean archived = body.archived() == null || body.archived();
     Requests.outcome(
@@ -77,13 +77,13 @@ final class CodebookRoutes {
 
   void removeCode(Context ctx) throws Exception {
     long id = Requests.idParam(ctx);
-    String coder = Requests.coder(Json.body(ctx, Requests.CoderBody.class).coder());
+    String coder = Requests.coder(ApiJson.body(ctx, Requests.CoderBody.class).coder());
     Requests.outcome(ctx, access, p -> p.codebook().remove(coder, Requests.known(p, id)));
   }
 
   void moveCode(Context ctx) throws Exception {
     long id = Requests.idParam(ctx);
-    MoveBody body = Json.body(ctx, MoveBody.class);
+    MoveBody body = ApiJson.body(ctx, MoveBody.class);
     String coder = Requests.coder(body.coder());
     if (body.place() == null || body.place() < 1) {
       throw ApiError.badField("place", "give the code's new place, 1 for first");
@@ -93,7 +93,7 @@ final class CodebookRoutes {
   }
 
   void mergeCodes(Context ctx) throws Exception {
-    MergeBody body = Json.body(ctx, MergeBody.class);
+    MergeBody body = ApiJson.body(ctx, MergeBody.class);
     String coder = Requests.coder(body.coder());
     if (body.codes() == null || body.codes().isEmpty()) {
       throw ApiError.badField("codes", "name the codes to merge, by id");
@@ -114,7 +114,7 @@ final class CodebookRoutes {
 
   void splitCode(Context ctx) throws Exception {
     long id = Requests.idParam(ctx);
-    SplitBody body = Json.body(ctx, SplitBody.class);
+    SplitBody body = ApiJson.body(ctx, SplitBody.class);
     String coder = Requests.coder(body.coder());
     if (body.code() == null || body.code().name().map(String::isBlank).orElse(true)) {
       throw ApiError.badField("code.name", "give the new code a name");

@@ -121,7 +121,7 @@ final class CodingRoutes {
   }
 
   void assign(Context ctx) throws Exception {
-    AssignBody body = Json.body(ctx, AssignBody.class);
+    AssignBody body = ApiJson.body(ctx, AssignBody.class);
     String coder = Requests.coder(body.coder());
     long answer = Requests.required(body.answer(), "answer");
     long code = Requests.required(body.code(), "code");
@@ -140,7 +140,7 @@ final class CodingRoutes {
   }
 
   void unassign(Context ctx) throws Exception {
-    AssignBody body = Json.body(ctx, AssignBody.class);
+    AssignBody body = ApiJson.body(ctx, AssignBody.class);
     String coder = Requests.coder(body.coder());
     long answer = Requests.required(body.answer(), "answer");
     long code = Requests.required(body.code(), "code");
@@ -148,7 +148,7 @@ final class CodingRoutes {
   }
 
   void accept(Context ctx) throws Exception {
-    AssignBody body = Json.body(ctx, AssignBody.class);
+    AssignBody body = ApiJson.body(ctx, AssignBody.class);
     String coder = Requests.coder(body.coder());
     long answer = Requests.required(body.answer(), "answer");
     long code = Requests.required(body.code(), "code");
@@ -157,7 +157,7 @@ final class CodingRoutes {
 
   /** Marks an answer as read with no (other) code applying. */
   void markRead(Context ctx) throws Exception {
-    AssignBody body = Json.body(ctx, AssignBody.class);
+    AssignBody body = ApiJson.body(ctx, AssignBody.class);
     String coder = Requests.coder(body.coder());
     long answer = Requests.required(body.answer(), "answer");
     change(ctx, answer, p -> p.coding().markRead(coder, answer));
@@ -165,19 +165,19 @@ final class CodingRoutes {
 
   /** Takes the "read, no code applies" mark off an answer. */
   void unmarkRead(Context ctx) throws Exception {
-    AssignBody body = Json.body(ctx, AssignBody.class);
+    AssignBody body = ApiJson.body(ctx, AssignBody.class);
     String coder = Requests.coder(body.coder());
     long answer = Requests.required(body.answer(), "answer");
     change(ctx, answer, p -> p.coding().unmarkRead(coder, answer));
   }
 
   void undo(Context ctx) throws Exception {
-    String coder = Requests.coder(Json.body(ctx, Requests.CoderBody.class).coder());
+    String coder = Requests.coder(ApiJson.body(ctx, Requests.CoderBody.class).coder());
     Requests.outcome(ctx, access, p -> p.coding().undo(coder));
   }
 
   void redo(Context ctx) throws Exception {
-    String coder = Requests.coder(Json.body(ctx, Requests.CoderBody.class).coder());
+    String coder = Requests.coder(ApiJson.body(ctx, Requests.CoderBody.class).coder());
     Requests.outcome(ctx, access, p -> p.coding().redo(coder));
   }
 
@@ -204,7 +204,7 @@ final class CodingRoutes {
   }
 
   void acceptAbove(Context ctx) throws Exception {
-    AcceptAboveBody body = Json.body(ctx, AcceptAboveBody.class);
+    AcceptAboveBody body = ApiJson.body(ctx, AcceptAboveBody.class);
     String coder = Requests.coder(body.coder());
     if (body.answers() == null || body.answers().isEmpty()) {
       throw ApiError.badField("answers", "name the answers whose suggestions to accept, by id");

@@ -36,7 +36,7 @@ final class ErrorPages extends ErrorHandler {
       Callback callback) {
     byte[] body;
     try {
-      body = Json.MAPPER.writeValueAsBytes(Errors.body(Errors.forStatus(code), Map.of()));
+      body = ApiJson.MAPPER.writeValueAsBytes(Errors.body(Errors.forStatus(code), Map.of()));
     } catch (JsonProcessingException e) {
       callback.failed(e);
       return;

@@ -39,7 +39,7 @@ final class ImportRoutes {
   }
 
   void preview(Context ctx) throws Exception {
-    Imports.Source source = Json.body(ctx, Imports.Source.class);
+    Imports.Source source = ApiJson.body(ctx, Imports.Source.class);
     int rows = source.rows() == null ? 10 : source.rows();
     if (rows < 1 || rows > 200) {
       throw ApiError.badField("rows", "rows must be between 1 and 200, not " + rows);
@@ -50,7 +50,7 @@ final class ImportRoutes {
   }
 
   void startImport(Context ctx) {
-    Imports.Source source = Json.body(ctx, Imports.Source.class);
+    Imports.Source source = ApiJson.body(ctx, Imports.Source.class);
     ImportRequest request = imports.request(source, "web");
     String job = imports.newJob();
     access.submit(

@@ -44,7 +44,7 @@ final class QueueRoutes {
   }
 
   void start(Context ctx) throws Exception {
-    StartBody body = Json.body(ctx, StartBody.class);
+    StartBody body = ApiJson.body(ctx, StartBody.class);
     String coder = Requests.coder(body.coder());
     QueueKey key = key(body.wave(), body.question(), body.segment(), true);
     OptionalLong seed = body.seed() == null ? OptionalLong.empty() : OptionalLong.of(body.seed());
@@ -75,7 +75,7 @@ final class QueueRoutes {
         access.call(p -> p.queues().page(key, offset, limit)).orElseThrow(() -> notStarted(key));
     List<Map<String, Object>> answers = new ArrayList<>();
     for (QueuePage.Item item : page.answers()) {
-      Map<String, Object> a = Json.MAPPER.convertValue(item.answer(), OBJECT);
+      Map<String, Object> a = ApiJson.MAPPER.convertValue(item.answer(), OBJECT);
       a.put("position", item.position());
       a.put("read", item.read());
       answers.add(a);

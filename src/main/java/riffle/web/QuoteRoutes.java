@@ -64,7 +64,7 @@ final class QuoteRoutes {
   }
 
   void pin(Context ctx) throws Exception {
-    PinBody body = Json.body(ctx, PinBody.class);
+    PinBody body = ApiJson.body(ctx, PinBody.class);
     String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     if (body.answerId() == null) {
@@ -88,7 +88,7 @@ final class QuoteRoutes {
   }
 
   void unpin(Context ctx) throws Exception {
-    ItemBody body = Json.body(ctx, ItemBody.class);
+    ItemBody body = ApiJson.body(ctx, ItemBody.class);
     String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     int index = index(body.index(), "index");
@@ -96,7 +96,7 @@ final class QuoteRoutes {
   }
 
   void move(Context ctx) throws Exception {
-    MoveBody body = Json.body(ctx, MoveBody.class);
+    MoveBody body = ApiJson.body(ctx, MoveBody.class);
     String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     int from = index(body.from(), "from");
@@ -106,7 +106,7 @@ final class QuoteRoutes {
   }
 
   void line(Context ctx) throws Exception {
-    LineBody body = Json.body(ctx, LineBody.class);
+    LineBody body = ApiJson.body(ctx, LineBody.class);
     String coder = Requests.coder(body.coder());
     QuoteSlot slot = slot(body.slot(), "slot");
     int index = index(body.index(), "index");

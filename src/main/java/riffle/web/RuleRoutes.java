@@ -29,7 +29,7 @@ final class RuleRoutes {
   }
 
   void addRule(Context ctx) throws Exception {
-    RuleBody body = Json.body(ctx, RuleBody.class);
+    RuleBody body = ApiJson.body(ctx, RuleBody.class);
     String coder = Requests.coder(body.coder());
     long code = Requests.required(body.code(), "code");
     String query = Requests.query(body.query());
@@ -40,7 +40,7 @@ final class RuleRoutes {
   }
 
   void previewRule(Context ctx) throws Exception {
-    RuleBody body = Json.body(ctx, RuleBody.class);
+    RuleBody body = ApiJson.body(ctx, RuleBody.class);
     long code = Requests.required(body.code(), "code");
     String query = Requests.query(body.query());
     int sample = body.sample() == null ? 5 : body.sample();
@@ -56,7 +56,7 @@ final class RuleRoutes {
   }
 
   void applyRules(Context ctx) throws Exception {
-    ApplyBody body = Json.body(ctx, ApplyBody.class);
+    ApplyBody body = ApiJson.body(ctx, ApplyBody.class);
     String coder = Requests.coder(body.coder());
     Requests.outcome(
         ctx,
@@ -72,7 +72,7 @@ final class RuleRoutes {
 
   void removeRule(Context ctx) throws Exception {
     long id = Requests.idParam(ctx);
-    String coder = Requests.coder(Json.body(ctx, Requests.CoderBody.class).coder());
+    String coder = Requests.coder(ApiJson.body(ctx, Requests.CoderBody.class).coder());
     Requests.outcome(
         ctx,
         access,
@@ -93,7 +93,7 @@ final class RuleRoutes {
   }
 
   void bulk(Context ctx) throws Exception {
-    RuleBody body = Json.body(ctx, RuleBody.class);
+    RuleBody body = ApiJson.body(ctx, RuleBody.class);
     String coder = Requests.coder(body.coder());
     long code = Requests.required(body.code(), "code");
     String query = Requests.query(body.query());

@@ -188,7 +188,7 @@ public final class WebServer implements AutoCloseable {
     cfg.jetty.port = options.port();
     cfg.http.maxRequestSize = MAX_JSON;
     cfg.jetty.modifyServer(server -> server.setErrorHandler(new ErrorPages()));
-    cfg.jsonMapper(new JavalinJackson(Json.MAPPER, false));
+    cfg.jsonMapper(new JavalinJackson(ApiJson.MAPPER, false));
     cfg.staticFiles.add(
         sf -> {
           sf.hostedPath = "/";

@@ -134,10 +134,15 @@ class CodingTest {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
       Code theme =
-          p.codebook().create("ana", CodeDraft.named("Delivery").withDirection(Direction.FRICTION));
+          p.codebook()
+              .create(
+                  "ana",
+                  CodeDraft.named("Delivery").toBuilder().direction(Direction.FRICTION).build());
       Code date =
-          p.codebook().create("ana", CodeDraft.named("Date unclear").withParent("Delivery"));
-      Code cost = p.codebook().create("ana", CodeDraft.named("Cost").withKey("c"));
+          p.codebook()
+              .create(
+                  "ana", CodeDraft.named("Date unclear").toBuilder().parent("Delivery").build());
+      Code cost = p.codebook().create("ana", CodeDraft.named("Cost").toBuilder().key("c").build());
       List<Long> ids = p.answerIds();
       List<Map<Long, TreeSet<String>>> states = new ArrayList<>();
       List<List<Code>> books = new ArrayList<>();
@@ -252,28 +257,35 @@ class CodingTest {
     try (Project p = Project.openExisting(project)) {
       Coding c = p.coding();
       Code delivery = p.codebook().create("ana", CodeDraft.named("Delivery"));
-      p.codebook().create("ana", CodeDraft.named("Date").withParent("Delivery").withKey("d"));
+      p.codebook()
+          .create("ana", CodeDraft.named("Date").toBuilder().parent("Delivery").key("d").build());
       List<Code> book = p.codebook().codes();
       assertMessage(
           "already a code named", () -> p.codebook().create("ana", CodeDraft.named(" delivery ")));
       assertMessage("needs a name", () -> p.codebook().create("ana", CodeDraft.named("  ")));
       assertMessage(
           "two levels deep",
-          () -> p.codebook().create("ana", CodeDraft.named("Day").withParent("Date")));
+          () ->
+              p.codebook()
+                  .create("ana", CodeDraft.named("Day").toBuilder().parent("Date").build()));
       assertMessage(
           "themes are two levels deep",
           () ->
               p.codebook()
-                  .change("ana", delivery.id(), CodeDraft.named("Delivery").withParent("Date")));
+                  .change(
+                      "ana",
+                      delivery.id(),
+                      CodeDraft.named("Delivery").toBuilder().parent("Date").build()));
       assertMessage(
           "already belongs to",
-          () -> p.codebook().create("ana", CodeDraft.named("X").withKey("d")));
+          () -> p.codebook().create("ana", CodeDraft.named("X").toBuilder().key("d").build()));
       assertMessage(
           "moves between answers",
-          () -> p.codebook().create("ana", CodeDraft.named("X").withKey("j")));
+          () -> p.codebook().create("ana", CodeDraft.named("X").toBuilder().key("j").build()));
       assertMessage(
           "no code named",
-          () -> p.codebook().create("ana", CodeDraft.named("X").withParent("Nope")));
+          () ->
+              p.codebook().create("ana", CodeDraft.named("X").toBuilder().parent("Nope").build()));
       assertEquals(book, p.codebook().codes());
     }
   }

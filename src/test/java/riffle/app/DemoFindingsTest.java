@@ -63,7 +63,9 @@ class DemoFindingsTest {
         codes.put(
             t.code(),
             p.codebook()
-                .create("truth", CodeDraft.named(t.code()).withDirection(Direction.FRICTION)));
+                .create(
+                    "truth",
+                    CodeDraft.named(t.code()).toBuilder().direction(Direction.FRICTION).build()));
       }
       for (int w = SampleResponses.WAVE_1; w <= SampleResponses.WAVE_3; w++) {
         GeneratedWave wave = waves.get(w);

@@ -29,7 +29,7 @@ class CliTest {
   /** What one run printed and returned. */
   record Run(int code, String out, String err) {
     JsonNode json() throws IOException {
-      return Json.MAPPER.readTree(out);
+      return JsonOutput.MAPPER.readTree(out);
     }
   }
 

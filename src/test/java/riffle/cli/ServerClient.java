@@ -39,7 +39,7 @@ final class ServerClient {
         HttpRequest.newBuilder(url.resolve(path))
             .header("Origin", origin)
             .header("Content-Type", "application/json")
-            .POST(HttpRequest.BodyPublishers.ofString(Json.MAPPER.writeValueAsString(body))));
+            .POST(HttpRequest.BodyPublishers.ofString(JsonOutput.MAPPER.writeValueAsString(body))));
   }
 
   private Answer send(HttpRequest.Builder request) throws IOException, InterruptedException {
@@ -49,7 +49,7 @@ final class ServerClient {
             HttpResponse.BodyHandlers.ofString(StandardCharsets.UTF_8));
     JsonNode json = null;
     if (r.headers().firstValue("Content-Type").orElse("").startsWith("application/json")) {
-      json = Json.MAPPER.readTree(r.body());
+      json = JsonOutput.MAPPER.readTree(r.body());
     }
     return new Answer(r.statusCode(), json, r.body());
   }

@@ -59,8 +59,8 @@ class TerminalTextTest {
   @Test
   void jsonStaysValidAndMeansTheSame() throws Exception {
     String value = "x\u009B\u202E\u001B\u007Fy";
-    String json = printed(Json.MAPPER.writeValueAsString(Map.of("text", value)));
+    String json = printed(JsonOutput.MAPPER.writeValueAsString(Map.of("text", value)));
     assertTrue(json.contains("\"x\\u009B\\u202E\\u001B\\u007Fy\""), json);
-    assertEquals(value, Json.MAPPER.readTree(json).get("text").asText());
+    assertEquals(value, JsonOutput.MAPPER.readTree(json).get("text").asText());
   }
 }

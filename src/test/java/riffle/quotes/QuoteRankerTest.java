@@ -297,7 +297,7 @@ class QuoteRankerTest {
   @Test
   void archivedCodesAreNotRankedAndACodeFilterLimitsTheRanking() {
     List<Code> codebook = new ArrayList<>(CODEBOOK);
-    codebook.set(0, CODEBOOK.get(0).withArchived(true));
+    codebook.set(0, CODEBOOK.get(0).toBuilder().archived(true).build());
     QuoteFindings f = QuoteRanker.rank(codebook, shop().list, QuoteSettings.defaults());
     assertTrue(f.codes().stream().noneMatch(c -> c.codeId() == PRICE));
     QuoteFindings only =

@@ -44,7 +44,7 @@ class CodingApiTest {
   }
 
   static WebServerTest.Answer post(String path, Object body) throws Exception {
-    String json = body instanceof String s ? s : Json.MAPPER.writeValueAsString(body);
+    String json = body instanceof String s ? s : ApiJson.MAPPER.writeValueAsString(body);
     return WebServerTest.send(
         HttpRequest.newBuilder(server.url().resolve(path))
             .header("Origin", WebServerTest.origin(server))
@@ -59,7 +59,7 @@ class CodingApiTest {
             .header("Content-Type", "application/json")
             .method(
                 "PATCH",
-                HttpRequest.BodyPublishers.ofString(Json.MAPPER.writeValueAsString(body))));
+                HttpRequest.BodyPublishers.ofString(ApiJson.MAPPER.writeValueAsString(body))));
   }
 
   static long code(String name, String key) throws Exception {

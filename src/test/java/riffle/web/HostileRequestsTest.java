@@ -125,7 +125,7 @@ class HostileRequestsTest {
                 + (WebServer.MAX_UPLOAD + 1)
                 + "\r\nConnection: close\r\n\r\n");
     assertEquals(413, r.status(), r.body());
-    JsonNode json = Json.MAPPER.readTree(r.body());
+    JsonNode json = ApiJson.MAPPER.readTree(r.body());
     assertRefusal(r.status(), json, "upload");
     assertTrue(json.get("error").asText().contains("100 MiB"), r.body());
     assertEquals(before, summary());
@@ -137,7 +137,7 @@ class HostileRequestsTest {
         raw("GET /api/%zz HTTP/1.1\r\nHost: " + host() + "\r\nConnection: close\r\n\r\n");
     assertEquals(400, badAddress.status(), badAddress.body());
     assertTrue(badAddress.contentType().startsWith("application/json"), badAddress.head());
-    assertRefusal(400, Json.MAPPER.readTree(badAddress.body()), "bad address");
+    assertRefusal(400, ApiJson.MAPPER.readTree(badAddress.body()), "bad address");
 
     Raw bigHeader =
         raw(
@@ -148,7 +148,7 @@ class HostileRequestsTest {
                 + "\r\nConnection: close\r\n\r\n");
     assertEquals(431, bigHeader.status(), bigHeader.head());
     assertTrue(bigHeader.contentType().startsWith("application/json"), bigHeader.head());
-    assertRefusal(431, Json.MAPPER.readTree(bigHeader.body()), "big header");
+    assertRefusal(431, ApiJson.MAPPER.readTree(bigHeader.body()), "big header");
 
     Raw longAddress =
         raw(
@@ -158,7 +158,7 @@ class HostileRequestsTest {
                 + host()
                 + "\r\nConnection: close\r\n\r\n");
     assertEquals(414, longAddress.status(), longAddress.head());
-    JsonNode json = Json.MAPPER.readTree(longAddress.body());
+    JsonNode json = ApiJson.MAPPER.readTree(longAddress.body());
     assertRefusal(414, json, "long address");
     assertTrue(json.get("error").asText().contains("address is too long"), json.toString());
   }

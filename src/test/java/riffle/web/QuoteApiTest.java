@@ -40,7 +40,7 @@ class QuoteApiTest {
   }
 
   static WebServerTest.Answer post(String path, Object body) throws Exception {
-    String json = body instanceof String s ? s : Json.MAPPER.writeValueAsString(body);
+    String json = body instanceof String s ? s : ApiJson.MAPPER.writeValueAsString(body);
     return WebServerTest.send(
         HttpRequest.newBuilder(server.url().resolve(path))
             .header("Origin", WebServerTest.origin(server))

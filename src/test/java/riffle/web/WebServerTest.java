@@ -93,7 +93,7 @@ class WebServerTest {
         HTTP.send(request.build(), HttpResponse.BodyHandlers.ofString(StandardCharsets.UTF_8));
     JsonNode json =
         r.headers().firstValue("Content-Type").orElse("").startsWith("application/json")
-            ? Json.MAPPER.readTree(r.body())
+            ? ApiJson.MAPPER.readTree(r.body())
             : null;
     return new Answer(r.statusCode(), json, r);
   }
@@ -103,7 +103,7 @@ class WebServerTest {
   }
 
   static String pasteJson(String text) throws Exception {
-    return Json.MAPPER.writeValueAsString(java.util.Map.of("paste", text));
+    return ApiJson.MAPPER.writeValueAsString(java.util.Map.of("paste", text));
   }
 
   @Test
@@ -407,7 +407,7 @@ class WebServerTest {
     Answer commit =
         post(
             "/api/imports",
-            Json.MAPPER.writeValueAsString(java.util.Map.of("paste", paste, "wave", "Broken")));
+            ApiJson.MAPPER.writeValueAsString(java.util.Map.of("paste", paste, "wave", "Broken")));
     JsonNode job = poll(commit.json().get("job").asText());
     assertEquals("failed", job.get("state").asText());
     assertEquals(3, job.get("error").get("where").get("line").asInt());
@@ -420,7 +420,8 @@ class WebServerTest {
     Answer date =
         post(
             "/api/imports",
-            Json.MAPPER.writeValueAsString(java.util.Map.of("paste", paste, "date", "15/09/2026")));
+            ApiJson.MAPPER.writeValueAsString(
+                java.util.Map.of("paste", paste, "date", "15/09/2026")));
     assertEquals(400, date.status());
     assertEquals("date", date.json().get("where").get("field").asText());
     Answer both = post("/api/imports", "{\"paste\": \"x\", \"upload\": \"u1\"}");
@@ -428,7 +429,7 @@ class WebServerTest {
     Answer twoIds =
         post(
             "/api/import/preview",
-            Json.MAPPER.writeValueAsString(
+            ApiJson.MAPPER.writeValueAsString(
                 java.util.Map.of(
                     "paste",
                     paste,
@@ -441,7 +442,7 @@ class WebServerTest {
     Answer delimiter =
         post(
             "/api/import/preview",
-            Json.MAPPER.writeValueAsString(java.util.Map.of("paste", paste, "delimiter", "#")));
+            ApiJson.MAPPER.writeValueAsString(java.util.Map.of("paste", paste, "delimiter", "#")));
     assertEquals("delimiter", delimiter.json().get("where").get("field").asText());
   }
 

@@ -53,10 +53,15 @@ public final class WorkbenchBench {
     int answers;
     try (Project p = Project.openExisting(file)) {
       answers = p.answerIds().size();
-      firstCode = p.codebook().create("bench", CodeDraft.named("Theme 0").withKey("a")).id();
+      firstCode =
+          p.codebook()
+              .create("bench", CodeDraft.named("Theme 0").toBuilder().key("a").build())
+              .id();
       for (int i = 1; i < 40; i++) {
         CodeDraft d = CodeDraft.named("Theme " + i);
-        p.codebook().create("bench", i < 8 ? d.withKey(Character.toString('b' + i - 1)) : d);
+        p.codebook()
+            .create(
+                "bench", i < 8 ? d.toBuilder().key(Character.toString('b' + i - 1)).build() : d);
       }
     }
     Path profile = Files.createTempDirectory("riffle-bench-chromium-");

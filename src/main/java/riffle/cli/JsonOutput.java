@@ -6,16 +6,16 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import java.io.PrintWriter;
 
 /**
- * The command line's JSON: Riffle's one JSON style ({@link riffle.web.Json#style}: snake_case keys,
- * ISO dates, lower-case enum values, an absent optional value as null), indented.
+ * The command line's JSON: Riffle's one JSON style ({@link riffle.web.ApiJson#style}: snake_case
+ * keys, ISO dates, lower-case enum values, an absent optional value as null), indented.
  */
-final class Json {
+final class JsonOutput {
   static final ObjectMapper MAPPER = mapper();
 
-  private Json() {}
+  private JsonOutput() {}
 
   private static ObjectMapper mapper() {
-    return riffle.web.Json.style().enable(SerializationFeature.INDENT_OUTPUT).build();
+    return riffle.web.ApiJson.style().enable(SerializationFeature.INDENT_OUTPUT).build();
   }
 
   static void print(PrintWriter out, Object value) {

@@ -28,10 +28,10 @@ import java.util.stream.Collectors;
  * The API's JSON: Riffle's one JSON style ({@link #style}), enum values read in any case; request
  * bodies with unknown fields are refused.
  */
-public final class Json {
+public final class ApiJson {
   static final ObjectMapper MAPPER = mapper();
 
-  private Json() {}
+  private ApiJson() {}
 
   private static ObjectMapper mapper() {
     return style()

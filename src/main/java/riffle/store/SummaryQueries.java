@@ -14,8 +14,8 @@ import riffle.model.ProjectSummary;
 import riffle.model.WaveSummary;
 
 /** Read-only counts over a project. */
-final class Summaries {
-  private Summaries() {}
+final class SummaryQueries {
+  private SummaryQueries() {}
 
   static ProjectSummary summary(Connection c) throws SQLException {
     List<WaveSummary> waves = new ArrayList<>();

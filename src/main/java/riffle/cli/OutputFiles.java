@@ -2,17 +2,18 @@ package riffle.cli;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import riffle.model.InputException;
 import riffle.model.InputProblem;
 
 /** Writing the files commands are asked for, with a clear message when that fails. */
-final class Files {
-  private Files() {}
+final class OutputFiles {
+  private OutputFiles() {}
 
   static void write(Path file, String text) throws InputException {
     try {
-      java.nio.file.Files.writeString(file, text, StandardCharsets.UTF_8);
+      Files.writeString(file, text, StandardCharsets.UTF_8);
     } catch (IOException e) {
       throw new InputException(
           new InputProblem(

@@ -13,7 +13,7 @@ import java.util.Set;
  * The active (not archived) codes in display order, each with a bit index, and for each code the
  * bits an answer carrying it counts towards: its own and its active ancestors'.
  */
-final class Codebook {
+final class CodeBits {
   final List<ReportCode> codes;
   final Map<String, Integer> indexById;
   final Map<String, ReportCode> all;
@@ -28,7 +28,7 @@ final class Codebook {
 
   final int words;
 
-  Codebook(List<ReportCode> codebook) {
+  CodeBits(List<ReportCode> codebook) {
     all = new LinkedHashMap<>();
     for (ReportCode c : codebook) {
       all.put(c.id(), c);

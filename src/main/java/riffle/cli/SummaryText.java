@@ -7,8 +7,8 @@ import riffle.model.ProjectSummary;
 import riffle.model.WaveSummary;
 
 /** Prints a project summary for people. */
-final class Summaries {
-  private Summaries() {}
+final class SummaryText {
+  private SummaryText() {}
 
   static void print(PrintWriter out, Path project, ProjectSummary s) {
     out.printf(Locale.ROOT, "Project %s%n", project);
