@@ -22,17 +22,11 @@ import riffle.model.QuoteSlot;
     name = "board",
     mixinStandardHelpOptions = true,
     description = "Shows the copy board; its subcommands pin, move, annotate and unpin quotes.",
-    subcommands = {
-      BoardCommand.Pin.class,
-      BoardCommand.Unpin.class,
-      BoardCommand.Move.class,
-      BoardCommand.Line.class
-    })
+    subcommands = {BoardCommand.Pin.class})
 final class BoardCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
-  @Option(names = "--project", paramLabel = "P", description = "Project file (to show its board).")
-  Path project;
+  @Mixin ListedProject shown;
 
   @Mixin JsonOption json;
 
@@ -48,10 +42,7 @@ final class BoardCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws InputException {
-    if (project == null) {
-      throw new picocli.CommandLine.ParameterException(
-          spec.commandLine(), "Missing required option: '--project=P'");
-    }
+    Path project = shown.required();
     CopyBoard board;
     List<String> takenOff;
     try (Project p = Project.openExisting(project)) {
@@ -139,84 +130,68 @@ final class BoardCommand implements Callable<Integer> {
       name = "unpin",
       mixinStandardHelpOptions = true,
       description = "Takes a quote off the board.")
-  static final class Unpin implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Option(names = "--slot", required = true, paramLabel = "SLOT")
-    QuoteSlot slot;
-
-    @Option(
-        names = "--number",
-        required = true,
-        paramLabel = "N",
-        description = "Its number in the slot (1 = first).")
-    int number;
-
-    @Override
-    public Integer call() throws InputException {
-      return CodesCommand.quotes(spec, options, (q, coder) -> q.unpin(coder, slot, number - 1));
-    }
+  int unpin(
+      @Mixin CodingOptions options,
+      @Option(names = "--slot", required = true, paramLabel = "SLOT") QuoteSlot slot,
+      @Option(
+              names = "--number",
+              required = true,
+              paramLabel = "N",
+              description = "Its number in the slot (1 = first).")
+          int number) {
+    return CodesCommand.quotes(spec, options, (q, coder) -> q.unpin(coder, slot, number - 1));
   }
 
   @Command(
       name = "move",
       mixinStandardHelpOptions = true,
       description = "Moves a quote within its slot or to another.")
-  static final class Move implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Option(names = "--slot", required = true, paramLabel = "SLOT")
-    QuoteSlot slot;
-
-    @Option(names = "--number", required = true, paramLabel = "N")
-    int number;
-
-    @Option(names = "--to", paramLabel = "SLOT", description = "Another slot (default: the same).")
-    QuoteSlot to;
-
-    @Option(
-        names = "--place",
-        required = true,
-        paramLabel = "N",
-        description = "Its new place (1 = first).")
-    int place;
-
-    @Override
-    public Integer call() throws InputException {
-      return CodesCommand.quotes(
-          spec,
-          options,
-          (q, coder) -> q.move(coder, slot, number - 1, to == null ? slot : to, place - 1));
-    }
+  int move(
+      @Mixin CodingOptions options,
+      @Option(names = "--slot", required = true, paramLabel = "SLOT") QuoteSlot slot,
+      @Option(
+              names = "--number",
+              required = true,
+              paramLabel = "N",
+              description = "Its number in the slot (1 = first).")
+          int number,
+      @Option(
+              names = "--to",
+              paramLabel = "SLOT",
+              description = "Another slot (default: the same).")
+          QuoteSlot to,
+      @Option(
+              names = "--place",
+              required = true,
+              paramLabel = "N",
+              description = "Its new place (1 = first).")
+          int place) {
+    return CodesCommand.quotes(
+        spec,
+        options,
+        (q, coder) -> q.move(coder, slot, number - 1, to == null ? slot : to, place - 1));
   }
 
   @Command(
       name = "line",
       mixinStandardHelpOptions = true,
       description = "Writes your working line beside a quote (the quote stays as it is).")
-  static final class Line implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Option(names = "--slot", required = true, paramLabel = "SLOT")
-    QuoteSlot slot;
-
-    @Option(names = "--number", required = true, paramLabel = "N")
-    int number;
-
-    @Option(
-        names = "--text",
-        required = true,
-        paramLabel = "TEXT",
-        description = "The line (\"\" clears it).")
-    String text;
-
-    @Override
-    public Integer call() throws InputException {
-      return CodesCommand.quotes(
-          spec, options, (q, coder) -> q.workingLine(coder, slot, number - 1, Optional.of(text)));
-    }
+  int line(
+      @Mixin CodingOptions options,
+      @Option(names = "--slot", required = true, paramLabel = "SLOT") QuoteSlot slot,
+      @Option(
+              names = "--number",
+              required = true,
+              paramLabel = "N",
+              description = "Its number in the slot (1 = first).")
+          int number,
+      @Option(
+              names = "--text",
+              required = true,
+              paramLabel = "TEXT",
+              description = "The line (\"\" clears it).")
+          String text) {
+    return CodesCommand.quotes(
+        spec, options, (q, coder) -> q.workingLine(coder, slot, number - 1, Optional.of(text)));
   }
 }

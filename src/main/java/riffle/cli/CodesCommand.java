@@ -39,19 +39,12 @@ import riffle.model.InputProblem;
       CodesCommand.Add.class,
       CodesCommand.Change.class,
       CodesCommand.Merge.class,
-      CodesCommand.Split.class,
-      CodesCommand.Archive.class,
-      CodesCommand.Restore.class,
-      CodesCommand.Remove.class,
-      CodesCommand.Order.class,
-      CodesCommand.Load.class,
-      CodesCommand.Save.class
+      CodesCommand.Split.class
     })
 final class CodesCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
-  @Option(names = "--project", paramLabel = "P", description = "Project file (to list it).")
-  Path project;
+  @Mixin ListedProject shown;
 
   @Mixin JsonOption json;
 
@@ -60,10 +53,7 @@ final class CodesCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws InputException {
-    if (project == null) {
-      throw new picocli.CommandLine.ParameterException(
-          spec.commandLine(), "Missing required option: '--project=P'");
-    }
+    Path project = shown.required();
     List<Listed> listed = new ArrayList<>();
     try (Project p = Project.openExisting(project)) {
       List<Code> book = p.codebook().codes();
@@ -293,85 +283,50 @@ final class CodesCommand implements Callable<Integer> {
       name = "archive",
       mixinStandardHelpOptions = true,
       description = "Retires a code, keeping its answers.")
-  static final class Archive implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Parameters(paramLabel = "CODE")
-    String code;
-
-    @Override
-    public Integer call() throws InputException {
-      return change(
-          spec,
-          options,
-          (p, coder) -> p.codebook().archive(coder, p.codebook().code(code).id(), true));
-    }
+  int archive(@Mixin CodingOptions options, @Parameters(paramLabel = "CODE") String code) {
+    return change(
+        spec,
+        options,
+        (p, coder) -> p.codebook().archive(coder, p.codebook().code(code).id(), true));
   }
 
   @Command(
       name = "restore",
       mixinStandardHelpOptions = true,
       description = "Brings an archived code back.")
-  static final class Restore implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Parameters(paramLabel = "CODE")
-    String code;
-
-    @Override
-    public Integer call() throws InputException {
-      return change(
-          spec,
-          options,
-          (p, coder) -> p.codebook().archive(coder, p.codebook().code(code).id(), false));
-    }
+  int restore(@Mixin CodingOptions options, @Parameters(paramLabel = "CODE") String code) {
+    return change(
+        spec,
+        options,
+        (p, coder) -> p.codebook().archive(coder, p.codebook().code(code).id(), false));
   }
 
   @Command(
       name = "remove",
       mixinStandardHelpOptions = true,
       description = "Deletes a code nobody used; a code in use is archived instead.")
-  static final class Remove implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Parameters(paramLabel = "CODE")
-    String code;
-
-    @Override
-    public Integer call() throws InputException {
-      return change(
-          spec, options, (p, coder) -> p.codebook().remove(coder, p.codebook().code(code).id()));
-    }
+  int remove(@Mixin CodingOptions options, @Parameters(paramLabel = "CODE") String code) {
+    return change(
+        spec, options, (p, coder) -> p.codebook().remove(coder, p.codebook().code(code).id()));
   }
 
   @Command(
       name = "order",
       mixinStandardHelpOptions = true,
       description = "Moves a code to another place in the list.")
-  static final class Order implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Parameters(paramLabel = "CODE")
-    String code;
-
-    @Option(
-        names = "--place",
-        required = true,
-        paramLabel = "N",
-        description = "Its new place (1 = first).")
-    int place;
-
-    @Override
-    public Integer call() throws InputException {
-      return change(
-          spec,
-          options,
-          (p, coder) -> p.codebook().reorder(coder, p.codebook().code(code).id(), place));
-    }
+  int order(
+      @Mixin CodingOptions options,
+      @Parameters(paramLabel = "CODE") String code,
+      @Option(
+              names = "--place",
+              required = true,
+              paramLabel = "N",
+              description = "Its new place (1 = first).")
+          int place) {
+    return change(
+        spec,
+        options,
+        (p, coder) -> p.codebook().reorder(coder, p.codebook().code(code).id(), place));
   }
 
   @Command(
@@ -379,46 +334,42 @@ final class CodesCommand implements Callable<Integer> {
       mixinStandardHelpOptions = true,
       description =
           "Brings in a codebook file (.csv or .json): named codes updated, new ones added.")
-  static final class Load implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Option(names = "--file", required = true, paramLabel = "F", description = "The codebook file.")
-    Path file;
-
-    @Override
-    public Integer call() throws InputException {
-      return change(spec, options, (p, coder) -> p.codebook().importCodebook(coder, file));
-    }
+  int load(
+      @Mixin CodingOptions options,
+      @Option(
+              names = "--file",
+              required = true,
+              paramLabel = "F",
+              description = "The codebook file.")
+          Path file) {
+    return change(spec, options, (p, coder) -> p.codebook().importCodebook(coder, file));
   }
 
   @Command(
       name = "save",
       mixinStandardHelpOptions = true,
       description = "Writes the codebook to a file (.csv or .json).")
-  static final class Save implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Option(names = "--out", required = true, paramLabel = "F", description = "The file to write.")
-    Path file;
-
-    @Override
-    public Integer call() throws InputException {
-      String text;
-      try (Project p = Project.openExisting(options.project)) {
-        text = p.codebook().exportCodebook(file.getFileName().toString());
-      }
-      try {
-        Files.writeString(file, text, StandardCharsets.UTF_8);
-      } catch (java.io.IOException e) {
-        throw new InputException(
-            new InputProblem(file.toString(), 0, 0, "cannot be written (" + e.getMessage() + ")"));
-      }
-      options.print(
-          spec.commandLine().getOut(),
-          new EditOutcome(0, "save-codebook", 0, 0, "Wrote the codebook to " + file + "."));
-      return 0;
+  int save(
+      @Mixin CodingOptions options,
+      @Option(
+              names = "--out",
+              required = true,
+              paramLabel = "F",
+              description = "The file to write.")
+          Path file) {
+    String text;
+    try (Project p = Project.openExisting(options.project)) {
+      text = p.codebook().exportCodebook(file.getFileName().toString());
     }
+    try {
+      Files.writeString(file, text, StandardCharsets.UTF_8);
+    } catch (java.io.IOException e) {
+      throw new InputException(
+          new InputProblem(file.toString(), 0, 0, "cannot be written (" + e.getMessage() + ")"));
+    }
+    options.print(
+        spec.commandLine().getOut(),
+        new EditOutcome(0, "save-codebook", 0, 0, "Wrote the codebook to " + file + "."));
+    return 0;
   }
 }

@@ -32,26 +32,17 @@ import riffle.model.SearchHit;
           + "except those from which a person took the code off. Rules run again on every new "
           + "wave."
     },
-    subcommands = {
-      RulesCommand.Add.class,
-      RulesCommand.Preview.class,
-      RulesCommand.Apply.class,
-      RulesCommand.Remove.class
-    })
+    subcommands = {RulesCommand.Add.class, RulesCommand.Preview.class})
 final class RulesCommand implements Callable<Integer> {
   @Spec CommandSpec spec;
 
-  @Option(names = "--project", paramLabel = "P", description = "Project file (to list it).")
-  Path project;
+  @Mixin ListedProject shown;
 
   @Mixin JsonOption json;
 
   @Override
   public Integer call() throws InputException {
-    if (project == null) {
-      throw new picocli.CommandLine.ParameterException(
-          spec.commandLine(), "Missing required option: '--project=P'");
-    }
+    Path project = shown.required();
     List<Rule> rules;
     Map<Long, String> names = new HashMap<>();
     try (Project p = Project.openExisting(project)) {
@@ -163,42 +154,29 @@ final class RulesCommand implements Callable<Integer> {
       name = "apply",
       mixinStandardHelpOptions = true,
       description = "Applies the saved rules (all, or one code's).")
-  static final class Apply implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Parameters(arity = "0..1", paramLabel = "CODE", description = "Only this code's rules.")
-    String code;
-
-    @Override
-    public Integer call() throws InputException {
-      return CodesCommand.change(
-          spec,
-          options,
-          (p, coder) ->
-              p.rules()
-                  .applyRules(
-                      coder,
-                      code == null
-                          ? OptionalLong.empty()
-                          : OptionalLong.of(p.codebook().code(code).id())));
-    }
+  int apply(
+      @Mixin CodingOptions options,
+      @Parameters(arity = "0..1", paramLabel = "CODE", description = "Only this code's rules.")
+          String code) {
+    return CodesCommand.change(
+        spec,
+        options,
+        (p, coder) ->
+            p.rules()
+                .applyRules(
+                    coder,
+                    code == null
+                        ? OptionalLong.empty()
+                        : OptionalLong.of(p.codebook().code(code).id())));
   }
 
   @Command(
       name = "remove",
       mixinStandardHelpOptions = true,
       description = "Deletes a rule; what it coded stays.")
-  static final class Remove implements Callable<Integer> {
-    @Spec CommandSpec spec;
-    @Mixin CodingOptions options;
-
-    @Parameters(paramLabel = "ID", description = "The rule's number.")
-    long id;
-
-    @Override
-    public Integer call() throws InputException {
-      return CodesCommand.change(spec, options, (p, coder) -> p.rules().removeRule(coder, id));
-    }
+  int remove(
+      @Mixin CodingOptions options,
+      @Parameters(paramLabel = "ID", description = "The rule's number.") long id) {
+    return CodesCommand.change(spec, options, (p, coder) -> p.rules().removeRule(coder, id));
   }
 }
