@@ -130,16 +130,9 @@ final class BoardCommand implements Callable<Integer> {
       name = "unpin",
       mixinStandardHelpOptions = true,
       description = "Takes a quote off the board.")
-  int unpin(
-      @Mixin CodingOptions options,
-      @Option(names = "--slot", required = true, paramLabel = "SLOT") QuoteSlot slot,
-      @Option(
-              names = "--number",
-              required = true,
-              paramLabel = "N",
-              description = "Its number in the slot (1 = first).")
-          int number) {
-    return CodesCommand.quotes(spec, options, (q, coder) -> q.unpin(coder, slot, number - 1));
+  int unpin(@Mixin CodingOptions options, @Mixin BoardPlace quote) {
+    return CodesCommand.quotes(
+        spec, options, (q, coder) -> q.unpin(coder, quote.slot, quote.index()));
   }
 
   @Command(
@@ -148,13 +141,7 @@ final class BoardCommand implements Callable<Integer> {
       description = "Moves a quote within its slot or to another.")
   int move(
       @Mixin CodingOptions options,
-      @Option(names = "--slot", required = true, paramLabel = "SLOT") QuoteSlot slot,
-      @Option(
-              names = "--number",
-              required = true,
-              paramLabel = "N",
-              description = "Its number in the slot (1 = first).")
-          int number,
+      @Mixin BoardPlace quote,
       @Option(
               names = "--to",
               paramLabel = "SLOT",
@@ -169,7 +156,8 @@ final class BoardCommand implements Callable<Integer> {
     return CodesCommand.quotes(
         spec,
         options,
-        (q, coder) -> q.move(coder, slot, number - 1, to == null ? slot : to, place - 1));
+        (q, coder) ->
+            q.move(coder, quote.slot, quote.index(), to == null ? quote.slot : to, place - 1));
   }
 
   @Command(
@@ -178,13 +166,7 @@ final class BoardCommand implements Callable<Integer> {
       description = "Writes your working line beside a quote (the quote stays as it is).")
   int line(
       @Mixin CodingOptions options,
-      @Option(names = "--slot", required = true, paramLabel = "SLOT") QuoteSlot slot,
-      @Option(
-              names = "--number",
-              required = true,
-              paramLabel = "N",
-              description = "Its number in the slot (1 = first).")
-          int number,
+      @Mixin BoardPlace quote,
       @Option(
               names = "--text",
               required = true,
@@ -192,6 +174,8 @@ final class BoardCommand implements Callable<Integer> {
               description = "The line (\"\" clears it).")
           String text) {
     return CodesCommand.quotes(
-        spec, options, (q, coder) -> q.workingLine(coder, slot, number - 1, Optional.of(text)));
+        spec,
+        options,
+        (q, coder) -> q.workingLine(coder, quote.slot, quote.index(), Optional.of(text)));
   }
 }

@@ -144,5 +144,37 @@ class QuotesCommandTest {
         after.get("slots").get(0).get("items").get(0).has("working_line")
             && !after.get("slots").get(0).get("items").get(0).get("working_line").isNull());
     assertEquals(0, after.get("slots").get(3).get("items").size(), "the objection pin undone");
+
+    CliTest.ok(
+        "board",
+        "move",
+        "--project",
+        project,
+        "--slot",
+        "headline",
+        "--number",
+        "1",
+        "--to",
+        "benefit",
+        "--place",
+        "1",
+        "--coder",
+        "ana");
+    JsonNode moved = CliTest.ok("board", "--project", project, "--json").json();
+    assertEquals(0, moved.get("slots").get(0).get("items").size(), "gone from the headlines");
+    assertEquals(1, moved.get("slots").get(2).get("items").size(), "now a benefit line");
+    CliTest.ok(
+        "board",
+        "unpin",
+        "--project",
+        project,
+        "--slot",
+        "benefit",
+        "--number",
+        "1",
+        "--coder",
+        "ana");
+    JsonNode unpinned = CliTest.ok("board", "--project", project, "--json").json();
+    assertEquals(0, unpinned.get("slots").get(2).get("items").size(), "unpinned");
   }
 }
