@@ -144,16 +144,21 @@ public final class AnalysisBench {
     List<List<String[]>> run(List<String> answers) {
       List<List<String[]>> out = new ArrayList<>(answers.size());
       for (String answer : answers) {
-        List<String[]> tags = new ArrayList<>();
-        for (String sentence : sentences.sentDetect(answer)) {
-          String[] tokens = tokenizer.tokenize(sentence);
-          String[] t = tagger.tag(tokens);
-          chunker.chunk(tokens, t);
-          tags.add(t);
-        }
-        out.add(tags);
+        out.add(tags(answer));
       }
       return out;
+    }
+
+    /** One answer through the four tools: its sentences' tags (the chunks are computed too). */
+    List<String[]> tags(String answer) {
+      List<String[]> tags = new ArrayList<>();
+      for (String sentence : sentences.sentDetect(answer)) {
+        String[] tokens = tokenizer.tokenize(sentence);
+        String[] t = tagger.tag(tokens);
+        chunker.chunk(tokens, t);
+        tags.add(t);
+      }
+      return tags;
     }
 
     private static InputStream open(String resource) {

@@ -1291,9 +1291,9 @@ public final class SampleResponses {
   // Wording
   // ---------------------------------------------------------------------------------------------
 
-  private static final List<String> MACHINES =
+  static final List<String> MACHINES =
       List.of("Velle Duo 2", "Quillo Mini", "Tarvo Lever", "Ardet One", "Brunic Pro");
-  private static final List<String> GRINDERS = List.of("Kivo 48", "Lunner 64", "Pell Flat 58");
+  static final List<String> GRINDERS = List.of("Kivo 48", "Lunner 64", "Pell Flat 58");
   private static final List<String> BUDGETS = List.of("300", "400", "500", "€350", "600");
   private static final List<String> DAYS = List.of("2", "3", "two", "three");
 
