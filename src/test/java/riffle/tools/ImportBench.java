@@ -151,12 +151,13 @@ public final class ImportBench {
     double importWall = median(imports, Measured::wallSeconds);
     return String.format(
         Locale.ROOT,
-        "Medians of %d runs each (wall time, peak RSS), fresh JVMs:%n%n"
+        "Medians of %d run%s each (wall time, peak RSS), fresh JVMs:%n%n"
             + "| answers | naive wall | naive RSS | import wall | import RSS | ratio"
             + " | cold phrases | cold info |%n"
             + "|---|---|---|---|---|---|---|---|%n"
             + "| %,d | %.2f s | %s | %.2f s | %s | %.2f | %.2f s, %s | %.2f s, %s |",
         runs,
+        runs == 1 ? "" : "s",
         answers,
         naiveWall,
         mib(median(naive, Measured::peakKb)),
@@ -244,7 +245,7 @@ public final class ImportBench {
     @Override
     public String toString() {
       return String.format(
-          Locale.ROOT, "%.2f s wall, %.2f s CPU, %,d MiB", wallSeconds, cpuSeconds, peakKb / 1024);
+          Locale.ROOT, "%.2f s wall, %.2f s CPU, %s", wallSeconds, cpuSeconds, mib(peakKb));
     }
   }
 
