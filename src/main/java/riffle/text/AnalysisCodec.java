@@ -20,7 +20,7 @@ import riffle.model.Token;
  */
 public final class AnalysisCodec {
   /** Bump when the form or the pipeline's output changes: cached analyses are then redone. */
-  public static final String VERSION = "text-2";
+  public static final String VERSION = "text-3";
 
   private static final int FORMAT = 1;
 
