@@ -332,6 +332,22 @@ class CliTest {
   }
 
   @Test
+  void everyCommandIsListedHelpedAndSuggestedThoughOnlyTheOneNamedIsBuilt() {
+    Run root = riffle("--help");
+    for (Class<?> c : Main.COMMANDS) {
+      String name = c.getAnnotation(picocli.CommandLine.Command.class).name();
+      assertTrue(
+          root.out().lines().anyMatch(l -> l.strip().startsWith(name + " ")), name + ":\n" + root);
+    }
+    Run help = riffle("help", "info");
+    assertEquals(0, help.code(), help.err());
+    assertTrue(help.out().startsWith("Usage: riffle info"), help.out());
+    Run typo = riffle("infoo");
+    assertEquals(2, typo.code());
+    assertTrue(typo.err().contains("Did you mean: riffle info?"), typo.err());
+  }
+
+  @Test
   void helpFormatsEveryDescriptionWithoutWarnings() {
     java.io.PrintStream realErr = System.err;
     ByteArrayOutputStream traced = new ByteArrayOutputStream();
