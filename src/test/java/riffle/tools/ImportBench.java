@@ -26,8 +26,8 @@ import org.apache.commons.csv.CSVPrinter;
  * sentence twice, so no cache of repeated sentences helps), then alternates, RUNS times (default
  * 3): (a) {@link NaiveImport}, Commons CSV and the stock OpenNLP tools one thread in sequence, as
  * {@code java -cp target/riffle.jar:target/test-classes riffle.tools.NaiveImport FILE}, and (b)
- * {@code java -jar target/riffle.jar import --project NEW --file FILE} into a fresh project. On the
- * last project it then runs {@code phrases --project P} and {@code info --project P} RUNS times
+ * {@code target/riffle import --project NEW --file FILE} (the launcher) into a fresh project. On
+ * the last project it then runs {@code phrases --project P} and {@code info --project P} RUNS times
  * each from a cold JVM. Every run goes through GNU time ({@code /usr/bin/time -v}) for its wall
  * time, CPU time and peak resident memory; the bench prints each run, the medians, the ratio of the
  * median wall times (Riffle over naive) and a markdown table, with the JVM and {@code nproc}.
@@ -39,6 +39,10 @@ import org.apache.commons.csv.CSVPrinter;
  */
 public final class ImportBench {
   static final Path JAR = Path.of("target", "riffle.jar");
+
+  /** Riffle runs as the README runs it: through the launcher the build writes. */
+  static final Path LAUNCHER = Path.of("target", "riffle");
+
   static final Path TEST_CLASSES = Path.of("target", "test-classes");
   static final Path TIME = Path.of("/usr/bin/time");
 
@@ -53,7 +57,9 @@ public final class ImportBench {
     int answers = args.length > 0 ? Integer.parseInt(args[0]) : 100_000;
     int runs = args.length > 1 ? Integer.parseInt(args[1]) : 3;
     Path naiveClass = TEST_CLASSES.resolve("riffle/tools/NaiveImport.class");
-    if (!Files.isRegularFile(JAR) || !Files.isRegularFile(naiveClass)) {
+    if (!Files.isRegularFile(JAR)
+        || !Files.isExecutable(LAUNCHER)
+        || !Files.isRegularFile(naiveClass)) {
       throw new IllegalStateException(
           "build first: mvn -q -o -DskipTests package && mvn -q -o test-compile");
     }
@@ -89,9 +95,7 @@ public final class ImportBench {
         imports.add(
             measure(
                 dir.resolve("import-" + run + ".log"),
-                java,
-                "-jar",
-                str(JAR),
+                str(LAUNCHER),
                 "import",
                 "--project",
                 str(project),
@@ -109,15 +113,9 @@ public final class ImportBench {
       for (int run = 1; run <= runs; run++) {
         phrases.add(
             measure(
-                dir.resolve("phrases.log"),
-                java,
-                "-jar",
-                str(JAR),
-                "phrases",
-                "--project",
-                str(project)));
+                dir.resolve("phrases.log"), str(LAUNCHER), "phrases", "--project", str(project)));
         Path infoLog = dir.resolve("info.log");
-        info.add(measure(infoLog, java, "-jar", str(JAR), "info", "--project", str(project)));
+        info.add(measure(infoLog, str(LAUNCHER), "info", "--project", str(project)));
         if (run == 1) {
           System.out.println("info:\n" + Files.readString(infoLog, StandardCharsets.UTF_8).strip());
         }
