@@ -8,6 +8,7 @@ import java.time.Duration;
 import java.util.Comparator;
 import java.util.stream.Stream;
 import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.StaleElementReferenceException;
 import org.openqa.selenium.WebDriver;
 import org.openqa.selenium.chrome.ChromeDriver;
 import org.openqa.selenium.chrome.ChromeDriverService;
@@ -63,8 +64,19 @@ final class Chromium {
 
   /** A wait of up to a minute that polls every 50 ms (the default 500 ms slows every step). */
   static WebDriverWait waiting(WebDriver driver) {
+    return waiting(driver, 60);
+  }
+
+  /**
+   * A wait of up to {@code seconds} polling every 50 ms. An element the page redrew between being
+   * found and being read is looked for again on the next poll, not a failure: the coding screen
+   * redraws its card whenever suggestions or changes made elsewhere arrive.
+   */
+  static WebDriverWait waiting(WebDriver driver, int seconds) {
     return (WebDriverWait)
-        new WebDriverWait(driver, Duration.ofSeconds(60)).pollingEvery(Duration.ofMillis(50));
+        new WebDriverWait(driver, Duration.ofSeconds(seconds))
+            .pollingEvery(Duration.ofMillis(50))
+            .ignoring(StaleElementReferenceException.class);
   }
 
   /** The text of the first element matching {@code css}, or "" when there is none. */

@@ -171,8 +171,14 @@ class CodingBrowserTest {
   }
 
   static void showWave(String wave, String state) {
-    // The wave list is filled again whenever the project's counts change: pick again if it was.
-    retrying(() -> new Select(driver.findElement(By.id("coding-wave"))).selectByVisibleText(wave));
+    // The wave list is filled again whenever the project's counts change: wait for the wave to be
+    // listed, and pick again if the list was filled anew meanwhile.
+    waiting()
+        .until(
+            d -> {
+              new Select(d.findElement(By.id("coding-wave"))).selectByVisibleText(wave);
+              return true;
+            });
     new Select(driver.findElement(By.id("coding-state"))).selectByValue(state);
     driver.findElement(By.id("coding-go")).click();
     waiting()

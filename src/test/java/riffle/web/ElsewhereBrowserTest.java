@@ -6,7 +6,6 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.List;
 import java.util.Optional;
 import org.junit.jupiter.api.AfterAll;
@@ -54,8 +53,7 @@ class ElsewhereBrowserTest {
   }
 
   static WebDriverWait within(int seconds) {
-    return (WebDriverWait)
-        new WebDriverWait(driver, Duration.ofSeconds(seconds)).pollingEvery(Duration.ofMillis(50));
+    return Chromium.waiting(driver, seconds);
   }
 
   @SuppressWarnings("unchecked")

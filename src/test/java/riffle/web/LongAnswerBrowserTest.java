@@ -98,7 +98,13 @@ class LongAnswerBrowserTest {
                     + ".some(b => b.textContent.includes('\\u202E')"
                     + " && getComputedStyle(b).unicodeBidi === 'isolate')");
     assertEquals(Boolean.TRUE, isolated);
-    driver.findElement(By.cssSelector("#coding-card .show-all")).click();
+    // Suggestions arriving redraw the card: click the button the card shows now.
+    waiting()
+        .until(
+            d -> {
+              d.findElement(By.cssSelector("#coding-card .show-all")).click();
+              return true;
+            });
     waiting().until(d -> text("#coding-text").length() == longAnswer.length());
     assertEquals(longAnswer, text("#coding-text"));
     assertTrue(driver.findElements(By.cssSelector("#coding-card .show-all")).isEmpty());
