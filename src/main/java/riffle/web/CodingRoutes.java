@@ -49,15 +49,7 @@ final class CodingRoutes {
   }
 
   void answers(Context ctx) throws Exception {
-    Map<String, String> segments = new LinkedHashMap<>();
-    for (String s : ctx.queryParams("segment")) {
-      int eq = s.indexOf('=');
-      if (eq <= 0 || eq == s.length() - 1) {
-        throw ApiError.badParameter(
-            "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
-      }
-      segments.put(ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
-    }
+    Map<String, String> segments = Requests.segments(ctx);
     Optional<Boolean> coded =
         switch (Optional.ofNullable(ctx.queryParam("coded")).orElse("").strip()) {
           case "" -> Optional.empty();

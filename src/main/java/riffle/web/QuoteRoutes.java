@@ -45,15 +45,7 @@ final class QuoteRoutes {
   record LineBody(String coder, QuoteSlot slot, Integer index, String line) {}
 
   void quotes(Context ctx) throws Exception {
-    Map<String, String> segments = new LinkedHashMap<>();
-    for (String s : ctx.queryParams("segment")) {
-      int eq = s.indexOf('=');
-      if (eq <= 0 || eq == s.length() - 1) {
-        throw ApiError.badParameter(
-            "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
-      }
-      segments.put(ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
-    }
+    Map<String, String> segments = Requests.segments(ctx);
     QuoteQuery query =
         new QuoteQuery(Requests.text(ctx, "code"), Requests.text(ctx, "wave"), segments);
     ctx.json(access.call(p -> p.quotes().rank(query)));

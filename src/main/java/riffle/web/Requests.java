@@ -2,7 +2,9 @@ package riffle.web;
 
 import io.javalin.http.Context;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import riffle.app.AnswerQuery;
 import riffle.app.Project;
@@ -76,6 +78,23 @@ final class Requests {
       throw ApiError.badField(field, "the request needs " + field + " (an id)");
     }
     return value;
+  }
+
+  /**
+   * The {@code segment} parameters, each {@code COLUMN=VALUE} (such as {@code device=mobile}), in
+   * the order given.
+   */
+  static Map<String, String> segments(Context ctx) {
+    Map<String, String> segments = new LinkedHashMap<>();
+    for (String s : ctx.queryParams("segment")) {
+      int eq = s.indexOf('=');
+      if (eq <= 0 || eq == s.length() - 1) {
+        throw ApiError.badParameter(
+            "segment", "a segment is COLUMN=VALUE, such as device=mobile, not '" + s + "'");
+      }
+      segments.put(ApiError.segmentColumn(s.substring(0, eq).strip()), s.substring(eq + 1).strip());
+    }
+    return segments;
   }
 
   static long idParam(Context ctx) {
