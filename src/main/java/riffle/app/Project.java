@@ -98,7 +98,10 @@ public final class Project implements AutoCloseable {
   }
 
   private ImportReport importTable(
-      ImportRequest request, SurveyTable table, Progress progress, Map<String, Analysis> analysed)
+      ImportRequest request,
+      SurveyTable table,
+      Progress progress,
+      Map<String, Analyses.Parsed> analysed)
       throws InputException {
     long lastBefore = store.lastAnswerId();
     ImportReport report =
@@ -120,7 +123,7 @@ public final class Project implements AutoCloseable {
       throws InputException {
     SurveyTable table = WaveImporter.read(request, progress);
     // Shared by both attempts: a second one (into a project made meanwhile) analyses nothing again.
-    Map<String, Analysis> analysed = new HashMap<>();
+    Map<String, Analyses.Parsed> analysed = new HashMap<>();
     if (!Files.exists(file)) {
       Optional<ImportReport> created =
           NewProject.create(file, p -> p.importTable(request, table, progress, analysed));

@@ -50,14 +50,14 @@ final class WaveImporter {
 
   private final ProjectStore store;
   private final Indexes.Around storing;
-  private final Map<String, Analysis> analysed;
+  private final Map<String, Analyses.Parsed> analysed;
 
   /**
    * An importer into {@code store}; {@code storing} wraps the writes to the project and the
    * analysis cache (the search index holds its lock around them); {@code analysed} keeps the
    * analysis of each text, so that a second attempt with the same table analyses nothing again.
    */
-  WaveImporter(ProjectStore store, Indexes.Around storing, Map<String, Analysis> analysed) {
+  WaveImporter(ProjectStore store, Indexes.Around storing, Map<String, Analyses.Parsed> analysed) {
     this.store = store;
     this.storing = storing;
     this.analysed = analysed;
@@ -118,7 +118,7 @@ final class WaveImporter {
         storing.around(
             () -> {
               BatchOutcome o = store.store(batch, progress);
-              Analyses.cache(store.file(), o.added());
+              Analyses.cache(store.file(), o.added(), analysed);
               Analyses.refresh(store, progress);
               return o;
             });
@@ -229,7 +229,7 @@ final class WaveImporter {
       SurveyTable table,
       List<Column> texts,
       Map<String, String> stored,
-      Map<String, Analysis> analysed,
+      Map<String, Analyses.Parsed> analysed,
       Progress progress) {
     Optional<Column> id = first(table, ColumnRole.ID);
     Optional<Column> date = first(table, ColumnRole.DATE);
@@ -258,12 +258,13 @@ final class WaveImporter {
         }
       }
     }
-    List<String> unknown = fresh.stream().filter(t -> !analysed.containsKey(t)).toList();
-    Iterator<Analysis> done = Analyses.analyzer().analyzeAll(unknown, progress).iterator();
+    // Each distinct text is analysed once, and kept encoded until it is stored.
+    List<String> unknown = fresh.stream().distinct().filter(t -> !analysed.containsKey(t)).toList();
+    Iterator<Analyses.Parsed> done = Analyses.parseAll(unknown, progress).iterator();
     for (String text : unknown) {
       analysed.put(text, done.next());
     }
-    Iterator<Analysis> analyses = fresh.stream().map(analysed::get).iterator();
+    Iterator<Analysis> analyses = fresh.stream().map(t -> analysed.get(t).analysis()).iterator();
     List<NewRespondent> out = new ArrayList<>(table.rows().size());
     for (int r = 0; r < table.rows().size(); r++) {
       SurveyRow row = table.rows().get(r);

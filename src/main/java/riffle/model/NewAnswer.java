@@ -14,7 +14,8 @@ import java.util.Objects;
  * @param column the 1-based field number of the answer
  * @param codes codes assigned elsewhere, in the order given; empty when none
  * @param coder who assigned {@code codes}
- * @param analysis the text analysis of {@code normalized}: masked text, language, masks, parse
+ * @param analysis the text analysis of {@code normalized}: the masked text, language and masks the
+ *     project file keeps (its sentences may be left out: the parse goes to the derived cache apart)
  * @param codedElsewhere whether a codes column of the export covers this answer: then it was read
  *     by {@code coder}, with or without codes
  */

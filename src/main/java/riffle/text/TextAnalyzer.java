@@ -3,7 +3,7 @@ package riffle.text;
 import java.nio.file.Path;
 import java.text.Normalizer;
 import java.util.ArrayList;
-import java.util.Arrays;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -15,6 +15,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Function;
 import opennlp.tools.langdetect.LanguageDetectorModel;
 import opennlp.tools.util.Span;
 import riffle.model.Analysis;
@@ -30,9 +31,10 @@ import riffle.model.Token;
  * stems and marks negation on the masked text. Thread-safe: each thread gets its own OpenNLP tools
  * over shared models, and identical sentences are parsed once.
  *
- * <p>Identical sentences are parsed once, and identical short answers analysed once (both caches
- * hold up to {@value #CACHE_LIMIT} entries and are then cleared); the results are immutable, so
- * sharing them changes nothing.
+ * <p>Identical sentences are parsed once (the cache holds up to {@value #CACHE_LIMIT} sentences and
+ * is then cleared: the frequent ones come back at once); parses are immutable, so sharing them
+ * changes nothing. Whole answers are not remembered: callers that meet one text many times (an
+ * import) analyse it once themselves, and keep what they need of it.
  *
  * <p>Steps, in order: Unicode NFC; masking ({@link PiiMasker}) of the whole answer; the language
  * check of the first {@link #MAX_ANALYSED_CHARS} characters; then, for answers in the analysis
@@ -51,8 +53,12 @@ public final class TextAnalyzer {
    */
   public static final int MAX_ANALYSED_CHARS = 5_000;
 
-  /** Identical sentences kept in the cache before it is cleared and refilled. */
-  static final int CACHE_LIMIT = 200_000;
+  /**
+   * Identical sentences kept in the cache before it is cleared and refilled: about 20 MB. Short
+   * sentences that many buyers write ("Fast delivery.") are met again within a few hundred answers,
+   * so a larger cache saves little and holds the heap of a large import.
+   */
+  static final int CACHE_LIMIT = 20_000;
 
   private final Map<String, Models> models;
   private final List<String> modelProblems;
@@ -60,10 +66,6 @@ public final class TextAnalyzer {
   private final ThreadLocal<Map<String, Pipeline>> pipelines;
   private final ThreadLocal<LanguageCheck> languages;
   private final ConcurrentHashMap<String, SentenceParse> cache = new ConcurrentHashMap<>();
-  private final ConcurrentHashMap<String, Analysis> answers = new ConcurrentHashMap<>();
-
-  /** Answers up to this length are remembered whole: short answers repeat the most. */
-  static final int REMEMBERED_ANSWER_LENGTH = 200;
 
   private TextAnalyzer(Map<String, Models> models, List<String> problems, PiiMasker masker) {
     this.models = models;
@@ -109,21 +111,6 @@ public final class TextAnalyzer {
   /** Analyses one answer. Never throws for any string. */
   public Analysis analyze(String answer) {
     String text = Normalizer.normalize(answer, Normalizer.Form.NFC);
-    if (text.length() > REMEMBERED_ANSWER_LENGTH) {
-      return analyzeText(text);
-    }
-    Analysis known = answers.get(text);
-    if (known == null) {
-      known = analyzeText(text);
-      if (answers.size() >= CACHE_LIMIT) {
-        answers.clear();
-      }
-      answers.put(text, known);
-    }
-    return known;
-  }
-
-  private Analysis analyzeText(String text) {
     PiiMasker.Masked masked = masker.mask(text);
     String m = masked.text();
     int limit = analysedLength(m);
@@ -158,18 +145,30 @@ public final class TextAnalyzer {
    * @return one analysis per answer, in the same order
    */
   public List<Analysis> analyzeAll(List<String> answers, Progress progress) {
+    return analyzeAll(answers, a -> a, progress);
+  }
+
+  /**
+   * Analyses many answers on all cores, in order, and keeps of each only what {@code keep} makes of
+   * its analysis (on the thread that analysed it): a large import keeps the parses encoded, not as
+   * objects. Reports progress as "analysing".
+   *
+   * @return one kept value per answer, in the same order
+   */
+  public <T> List<T> analyzeAll(
+      List<String> answers, Function<Analysis, T> keep, Progress progress) {
     int n = answers.size();
-    Analysis[] out = new Analysis[n];
+    List<T> out = new ArrayList<>(Collections.nCopies(n, null));
     int threads = Math.max(1, Math.min(Runtime.getRuntime().availableProcessors(), n / 64));
     if (threads == 1) {
       for (int i = 0; i < n; i++) {
-        out[i] = analyze(answers.get(i));
+        out.set(i, keep.apply(analyze(answers.get(i))));
         if (i % 500 == 0) {
           progress.update("analysing", i, n);
         }
       }
       progress.update("analysing", n, n);
-      return Arrays.asList(out);
+      return out;
     }
     AtomicInteger next = new AtomicInteger();
     AtomicInteger done = new AtomicInteger();
@@ -181,10 +180,11 @@ public final class TextAnalyzer {
         work.add(
             pool.submit(
                 () -> {
+                  // Each task sets only its own slots; Future.get publishes them to this thread.
                   for (int from = next.getAndAdd(block); from < n; from = next.getAndAdd(block)) {
                     int to = Math.min(n, from + block);
                     for (int i = from; i < to; i++) {
-                      out[i] = analyze(answers.get(i));
+                      out.set(i, keep.apply(analyze(answers.get(i))));
                     }
                     done.addAndGet(to - from);
                   }
@@ -209,7 +209,7 @@ public final class TextAnalyzer {
       pool.shutdownNow();
     }
     progress.update("analysing", n, n);
-    return Arrays.asList(out);
+    return out;
   }
 
   private static Thread worker(Runnable r) {
