@@ -20,7 +20,16 @@ import riffle.store.ProjectStore;
 final class PhraseMining {
   private PhraseMining() {}
 
+  /**
+   * The phrases the query asks for; read from the derived cache when an earlier command mined the
+   * same of the project as it stands.
+   */
   static PhraseFindings run(ProjectStore store, PhraseQuery q) throws ProjectFileException {
+    return KeptResults.get(store, "phrases", q, PhraseFindings.class, () -> mine(store, q));
+  }
+
+  private static PhraseFindings mine(ProjectStore store, PhraseQuery q)
+      throws ProjectFileException {
     List<String> waves = store.waveNames();
     Optional<String> wave = q.wave().map(w -> Lookups.wave(w, waves, "wave"));
     Optional<String> against = q.against().map(w -> Lookups.wave(w, waves, "against"));

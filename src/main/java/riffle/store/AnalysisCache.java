@@ -17,9 +17,11 @@ import org.sqlite.SQLiteException;
 
 /**
  * The derived analysis cache beside a project ({@code NAME.riffle.d/analysis.db}): each answer's
- * parsed sentences, keyed by answer id and stamped with the analysis version. Derived, never the
- * source of truth: a missing, damaged or foreign cache is deleted and rebuilt, and losing it loses
- * no work. Not thread-safe: one instance per thread.
+ * parsed sentences, keyed by answer id and stamped with the analysis version, and the last results
+ * of costly read-only computations (phrases), keyed by what was asked and stamped with the state of
+ * the project they were computed from. Derived, never the source of truth: a missing, damaged or
+ * foreign cache is deleted and rebuilt, and losing it loses no work. Not thread-safe: one instance
+ * per thread.
  */
 public final class AnalysisCache implements AutoCloseable {
   static final int APPLICATION_ID = 0x52664331;
@@ -104,11 +106,95 @@ public final class AnalysisCache implements AutoCloseable {
       try (ResultSet rs = s.executeQuery("SELECT count(*) FROM analysis")) {
         rs.next();
       }
+      if (!hasTable(c, "result")) {
+        s.executeUpdate(
+            "CREATE TABLE IF NOT EXISTS result (key TEXT PRIMARY KEY, stamp TEXT NOT NULL,"
+                + " used INTEGER NOT NULL, data BLOB NOT NULL)");
+      }
     } catch (SQLException e) {
       c.close();
       throw e;
     }
     return new AnalysisCache(c);
+  }
+
+  private static boolean hasTable(Connection c, String name) throws SQLException {
+    try (PreparedStatement ps =
+        c.prepareStatement("SELECT 1 FROM sqlite_master WHERE type = 'table' AND name = ?")) {
+      ps.setString(1, name);
+      try (ResultSet rs = ps.executeQuery()) {
+        return rs.next();
+      }
+    }
+  }
+
+  /** Results kept; the least recently used goes first. */
+  static final int RESULTS_KEPT = 64;
+
+  /**
+   * The result kept under {@code key}, when it was computed from the project as {@code stamp}
+   * describes it; a result from another state is dropped.
+   */
+  public Optional<byte[]> result(String key, String stamp) throws ProjectFileException {
+    try (PreparedStatement ps =
+        connection.prepareStatement("SELECT stamp, data FROM result WHERE key = ?")) {
+      ps.setString(1, key);
+      try (ResultSet rs = ps.executeQuery()) {
+        if (!rs.next()) {
+          return Optional.empty();
+        }
+        if (rs.getString(1).equals(stamp)) {
+          return Optional.of(rs.getBytes(2));
+        }
+      }
+      try (PreparedStatement drop =
+          connection.prepareStatement("DELETE FROM result WHERE key = ?")) {
+        drop.setString(1, key);
+        drop.executeUpdate();
+      }
+      return Optional.empty();
+    } catch (SQLException e) {
+      throw new ProjectFileException("cannot read the analysis cache: " + e.getMessage(), e);
+    }
+  }
+
+  /**
+   * Keeps a result under {@code key}, computed from the project as {@code stamp} describes it;
+   * results made from another state, and the least recently stored beyond {@link #RESULTS_KEPT},
+   * are dropped.
+   */
+  public void putResult(String key, String stamp, byte[] data) throws ProjectFileException {
+    try {
+      connection.setAutoCommit(false);
+      try (PreparedStatement stale =
+              connection.prepareStatement("DELETE FROM result WHERE stamp <> ?");
+          PreparedStatement put =
+              connection.prepareStatement(
+                  "INSERT OR REPLACE INTO result (key, stamp, used, data) VALUES (?, ?,"
+                      + " (SELECT coalesce(max(used), 0) + 1 FROM result), ?)");
+          PreparedStatement trim =
+              connection.prepareStatement(
+                  "DELETE FROM result WHERE key NOT IN"
+                      + " (SELECT key FROM result ORDER BY used DESC LIMIT ?)")) {
+        stale.setString(1, stamp);
+        stale.executeUpdate();
+        put.setString(1, key);
+        put.setString(2, stamp);
+        put.setBytes(3, data);
+        put.executeUpdate();
+        trim.setInt(1, RESULTS_KEPT);
+        trim.executeUpdate();
+      }
+      connection.commit();
+    } catch (SQLException e) {
+      throw new ProjectFileException("cannot write the analysis cache: " + e.getMessage(), e);
+    } finally {
+      try {
+        connection.setAutoCommit(true);
+      } catch (SQLException e) {
+        // The connection is unusable; the next open rebuilds the cache.
+      }
+    }
   }
 
   /** One answer's cached parse. */
