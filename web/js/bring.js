@@ -30,6 +30,12 @@ const ENCODINGS = [
   ['UTF-16BE', 'UTF-16 BE'],
 ];
 
+const DATE_ORDERS = [
+  ['auto', 'Detect'],
+  ['dmy', 'Day first (31.12.2026)'],
+  ['mdy', 'Month first (12/31/2026)'],
+];
+
 let ctx;
 let els;
 /** What is being brought in: {paste} or {upload, name}. */
@@ -66,6 +72,7 @@ export function mount(section, context) {
   els.readPaste = h('button', { type: 'button', id: 'bring-read', on: { click: readPaste } }, 'Read the pasted cells');
   els.delimiter = h('select', { id: 'bring-delimiter', on: { change: reread } }, options(DELIMITERS, 'auto'));
   els.encoding = h('select', { id: 'bring-encoding', on: { change: reread } }, options(ENCODINGS, 'auto'));
+  els.dateOrder = h('select', { id: 'bring-date-order', on: { change: reread } }, options(DATE_ORDERS, 'auto'));
 
   els.previewBox = h('section', { class: 'panel', id: 'bring-preview', 'aria-labelledby': 'h-bring-preview', hidden: true });
   els.waveBox = h('section', { class: 'panel', id: 'bring-wave', 'aria-labelledby': 'h-bring-wave', hidden: true });
@@ -125,8 +132,9 @@ export function mount(section, context) {
             { class: 'fields' },
             h('div', { class: 'field' }, h('label', { for: 'bring-delimiter' }, 'Delimiter'), els.delimiter),
             h('div', { class: 'field' }, h('label', { for: 'bring-encoding' }, 'Encoding'), els.encoding),
+            h('div', { class: 'field' }, h('label', { for: 'bring-date-order' }, 'Dates'), els.dateOrder),
           ),
-          h('p', { class: 'hint' }, 'Both are detected; change them when the preview looks wrong.'),
+          h('p', { class: 'hint' }, 'All three are detected; change them when the preview looks wrong.'),
         ),
         h(
           'div',
@@ -202,6 +210,7 @@ function request(extra = {}) {
   const body = {
     delimiter: els.delimiter.value,
     encoding: els.encoding.value,
+    date_order: els.dateOrder.value,
     ...extra,
   };
   if (source.upload) body.upload = source.upload;
@@ -283,6 +292,7 @@ function showPreview() {
           },
           options(ROLES, roles[i]),
         ),
+        h('span', { class: 'why' }, rolesChanged ? 'as chosen' : c.reason),
       ),
     ),
   );
@@ -389,6 +399,7 @@ function showImportError(e) {
   const field = e.where && e.where.field;
   if (field === 'wave') return fieldError(els.waveError, els.wave, e.message);
   if (field === 'date') return fieldError(els.dateError, els.date, e.message);
+  if (e.where && e.where.setting === 'date order') els.dateOrder.setAttribute('aria-invalid', 'true');
   if (field && field.startsWith('columns.')) {
     const sel = els.previewBox.querySelectorAll('select.role')[Number(field.split('.')[1])];
     if (sel) sel.setAttribute('aria-invalid', 'true');

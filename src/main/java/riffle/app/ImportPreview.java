@@ -1,7 +1,10 @@
 package riffle.app;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
+import riffle.ingest.DateColumn;
 import riffle.ingest.SurveyRow;
 import riffle.ingest.SurveyTable;
 import riffle.model.InputException;
@@ -73,6 +76,15 @@ public record ImportPreview(
     }
     SurveyTable table = WaveImporter.read(request, Progress.NONE);
     PiiMasker masker = PiiMasker.standard();
+    DateColumn.Reading dates =
+        DateColumn.read(table, request.settings().dateOrder(), request.settings().maxProblems());
+    List<InputProblem> problems = new ArrayList<>(table.problems());
+    dates
+        .unsettled()
+        .ifPresent(
+            m ->
+                problems.add(new InputProblem(table.source(), 0, 0, m, Optional.of("date order"))));
+    problems.addAll(dates.problems());
     List<Row> rows =
         table.rows().stream()
             .limit(maxRows)
@@ -84,13 +96,11 @@ public record ImportPreview(
         table.encodingDetected(),
         table.delimiter().label(),
         table.delimiterDetected(),
-        table.columns().stream()
-            .map(c -> new ImportReport.ColumnReport(c.header(), c.role(), c.detected()))
-            .toList(),
+        table.columns().stream().map(ImportReport.ColumnReport::of).toList(),
         rows,
         table.rows().size(),
         table.skippedRows(),
-        table.problems());
+        problems);
   }
 
   private static List<String> masked(PiiMasker masker, SurveyRow row) {

@@ -2,6 +2,7 @@ package riffle.app;
 
 import java.time.LocalDate;
 import java.util.List;
+import riffle.ingest.Column;
 import riffle.model.ColumnRole;
 import riffle.model.InputProblem;
 
@@ -10,6 +11,8 @@ import riffle.model.InputProblem;
  *
  * @param wave the wave imported into
  * @param fieldedOn the wave's fielding date
+ * @param dated where that date comes from, in words ("the latest date in column 'Submitted', read
+ *     day-first")
  * @param source the file name, or "paste"
  * @param encoding the encoding the export was read with
  * @param delimiter the delimiter's label
@@ -25,6 +28,7 @@ import riffle.model.InputProblem;
 public record ImportReport(
     String wave,
     LocalDate fieldedOn,
+    String dated,
     String source,
     String encoding,
     String delimiter,
@@ -47,6 +51,11 @@ public record ImportReport(
    * @param header the column's header
    * @param role what it holds
    * @param detected true when the role was detected rather than named
+   * @param reason why it has that role, in words
    */
-  public record ColumnReport(String header, ColumnRole role, boolean detected) {}
+  public record ColumnReport(String header, ColumnRole role, boolean detected, String reason) {
+    static ColumnReport of(Column c) {
+      return new ColumnReport(c.header(), c.role(), c.detected(), c.reason());
+    }
+  }
 }

@@ -6,6 +6,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import riffle.ingest.DateOrder;
 import riffle.ingest.Delimiter;
 import riffle.ingest.ImportSettings;
 import riffle.model.ColumnRole;
@@ -108,6 +109,13 @@ public final class ImportRequest {
     /** {@code auto} or a charset name such as {@code windows-1252}. */
     public Builder encoding(String encoding) {
       settings.encoding(encoding);
+      return this;
+    }
+
+    /** {@code dmy} or {@code mdy}: how to read numeric dates; null or {@code auto} to decide. */
+    public Builder dateOrder(String order) {
+      settings.dateOrder(
+          order == null || order.strip().equalsIgnoreCase("auto") ? null : DateOrder.parse(order));
       return this;
     }
 

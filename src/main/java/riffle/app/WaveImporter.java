@@ -9,7 +9,6 @@ import java.security.DigestInputStream;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.text.Normalizer;
-import java.time.DateTimeException;
 import java.time.LocalDate;
 import java.time.ZoneId;
 import java.util.ArrayList;
@@ -22,6 +21,7 @@ import java.util.Map;
 import java.util.Optional;
 import riffle.ingest.CodeList;
 import riffle.ingest.Column;
+import riffle.ingest.DateColumn;
 import riffle.ingest.NonAnswers;
 import riffle.ingest.SurveyReader;
 import riffle.ingest.SurveyRow;
@@ -91,10 +91,15 @@ final class WaveImporter {
               + request.fieldedOn().get()
               + "; leave out its date to add to it, or name a new wave");
     }
+    DateColumn.Reading dates =
+        DateColumn.read(table, request.settings().dateOrder(), request.settings().maxProblems());
+    if (stored.isEmpty() && request.fieldedOn().isEmpty() && dates.unsettled().isPresent()) {
+      throw new SettingException("date order", dates.unsettled().get());
+    }
     LocalDate date =
         stored
             .or(request::fieldedOn)
-            .orElseGet(() -> latestDate(table).orElse(LocalDate.now(ZoneId.systemDefault())));
+            .orElseGet(() -> dates.latest().orElse(LocalDate.now(ZoneId.systemDefault())));
 
     List<Column> texts = table.columnsWith(ColumnRole.TEXT);
     List<String> questions = texts.stream().map(Column::header).toList();
@@ -123,17 +128,28 @@ final class WaveImporter {
               return o;
             });
     List<InputProblem> problems = new ArrayList<>(table.problems());
+    problems.addAll(dates.problems());
     problems.addAll(outcome.problems());
     problems.addAll(analysedInPart(table.source(), respondents, request.settings().maxProblems()));
     return new ImportReport(
         wave,
         date,
+        stored.isPresent()
+            ? "the wave's date"
+            : request.fieldedOn().isPresent()
+                ? "as given"
+                : dates.latest().isPresent()
+                    ? "the latest date in column '"
+                        + dates.column().orElseThrow()
+                        + "', read "
+                        + dates.read()
+                    : dates.column().isPresent()
+                        ? "today: no date in column '" + dates.column().get() + "' could be read"
+                        : "today: the export has no date column",
         table.source(),
         table.encoding(),
         table.delimiter().label(),
-        table.columns().stream()
-            .map(c -> new ImportReport.ColumnReport(c.header(), c.role(), c.detected()))
-            .toList(),
+        table.columns().stream().map(ImportReport.ColumnReport::of).toList(),
         table.rows().size() + table.skippedRows(),
         outcome.answersAdded(),
         table.skippedRows(),
@@ -318,30 +334,6 @@ final class WaveImporter {
 
   private static Optional<Column> first(SurveyTable table, ColumnRole role) {
     return table.columnsWith(role).stream().findFirst();
-  }
-
-  /** The latest ISO date (the first ten characters of a date or date-time) in the date column. */
-  private static Optional<LocalDate> latestDate(SurveyTable table) {
-    Optional<Column> column = first(table, ColumnRole.DATE);
-    if (column.isEmpty()) {
-      return Optional.empty();
-    }
-    LocalDate latest = null;
-    for (SurveyRow row : table.rows()) {
-      String cell = row.cell(column.get()).strip();
-      if (cell.length() < 10) {
-        continue;
-      }
-      try {
-        LocalDate d = LocalDate.parse(cell.substring(0, 10));
-        if (latest == null || d.isAfter(latest)) {
-          latest = d;
-        }
-      } catch (DateTimeException e) {
-        // Not ISO: the column may use another format; the wave then takes today's date.
-      }
-    }
-    return Optional.ofNullable(latest);
   }
 
   private static String sha256(ImportRequest request) {

@@ -32,6 +32,7 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
           Map.entry("max size", "--max-mb"),
           Map.entry("max columns", "--max-columns"),
           Map.entry("delimiter", "--delimiter"),
+          Map.entry("date order", "--date-order"),
           Map.entry("encoding", "--encoding"),
           Map.entry("text column", "--text-column"),
           Map.entry("id column", "--id-column"),

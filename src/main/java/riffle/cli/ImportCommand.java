@@ -72,6 +72,14 @@ final class ImportCommand implements Callable<Integer> {
   LocalDate date;
 
   @Option(
+      names = "--date-order",
+      paramLabel = "ORDER",
+      description =
+          "How numeric dates read: dmy (31.12.2026), mdy (12/31/2026) or auto (default: decided"
+              + " from the date column; asked for when it cannot be told).")
+  String dateOrder;
+
+  @Option(
       names = "--text-column",
       paramLabel = "C",
       description = "An open-text question column (repeatable); detected when none is named.")
@@ -146,6 +154,7 @@ final class ImportCommand implements Callable<Integer> {
         ImportRequest.from(source)
             .wave(wave)
             .fieldedOn(date)
+            .dateOrder(dateOrder)
             .actor(Actor.current())
             .delimiter(delimiter)
             .encoding(encoding)
@@ -177,19 +186,15 @@ final class ImportCommand implements Callable<Integer> {
   private static void print(PrintWriter out, ImportReport r) {
     out.printf(
         Locale.ROOT,
-        "Imported into wave \"%s\" (fielded %s) from %s%n",
+        "Imported into wave \"%s\" (fielded %s: %s) from %s%n",
         r.wave(),
         r.fieldedOn(),
+        r.dated(),
         r.source());
     out.printf(Locale.ROOT, "  read as %s, %s-separated%n", r.encoding(), r.delimiter());
     out.println("  columns:");
     for (ImportReport.ColumnReport c : r.columns()) {
-      out.printf(
-          Locale.ROOT,
-          "    %-14s %s%s%n",
-          roleLabel(c.role()),
-          c.header(),
-          c.detected() ? "" : "  (as named)");
+      out.printf(Locale.ROOT, "    %-14s %s  (%s)%n", roleLabel(c.role()), c.header(), c.reason());
     }
     out.printf(
         Locale.ROOT,

@@ -13,10 +13,13 @@ import riffle.model.ColumnRole;
  * @param detected true when the role was detected, false when the analyst named the column
  * @param answersColumn for a {@link ColumnRole#CODES} column, the index of the {@link
  *     ColumnRole#TEXT} column whose answers its codes belong to; -1 for every other role
+ * @param reason why the column has its role, in words an analyst reads in the import's summary and
+ *     the page's preview ("free text: 8 words on average")
  */
 public record Column(
-    int index, String header, ColumnRole role, boolean detected, int answersColumn) {
+    int index, String header, ColumnRole role, boolean detected, int answersColumn, String reason) {
   public Column {
+    Objects.requireNonNull(reason, "reason");
     if (index < 0) {
       throw new IllegalArgumentException("index must be >= 0, got " + index);
     }

@@ -1,9 +1,12 @@
 package riffle.ingest;
 
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
+import java.util.regex.Pattern;
 
 /**
  * What the values of one column look like over a sample of rows: how many are filled, how many
@@ -35,6 +38,9 @@ final class ColumnProfile {
   /** Share of distinct substantive values among substantive values (ignoring case). */
   final double variety;
 
+  /** Share of substantive values whose value (ignoring case) no other row gives. */
+  final double singletonShare;
+
   /** Mean length of all non-blank values. */
   final double meanFilledLength;
 
@@ -50,6 +56,20 @@ final class ColumnProfile {
   /** Share of non-blank values shaped like a date or date-time. */
   final double dateShare;
 
+  /** Share of non-blank values that are spreadsheet serial dates ({@link DateColumn#isSerial}). */
+  final double serialShare;
+
+  /** Share of non-blank values that are a yes, a no or the like ({@code Y}, {@code true}). */
+  final double yesNoShare;
+
+  /** Share of non-blank values that are a number (a rating, an amount, a percentage). */
+  final double numberShare;
+
+  private static final Set<String> YES_NO =
+      Set.of("yes", "no", "y", "n", "true", "false", "maybe", "not sure", "yes.", "no.");
+
+  private static final Pattern NUMBER = Pattern.compile("[-+]?\\d+(?:[.,]\\d+)?\\s*%?");
+
   ColumnProfile(List<SurveyRow> sample, int column) {
     int filled = 0;
     int substantive = 0;
@@ -61,9 +81,12 @@ final class ColumnProfile {
     int digits = 0;
     int emails = 0;
     int dates = 0;
+    int yesNo = 0;
+    int serials = 0;
+    int numbers = 0;
     Set<String> exact = new HashSet<>();
     Set<String> folded = new HashSet<>();
-    Set<String> foldedSubstantive = new HashSet<>();
+    Map<String, Integer> foldedSubstantive = new HashMap<>();
     for (SurveyRow row : sample) {
       String v = row.cells().get(column).strip();
       if (v.isEmpty()) {
@@ -87,6 +110,15 @@ final class ColumnProfile {
       if (DateShapes.looksLikeDate(v)) {
         dates++;
       }
+      if (DateColumn.isSerial(v)) {
+        serials++;
+      }
+      if (YES_NO.contains(f)) {
+        yesNo++;
+      }
+      if (NUMBER.matcher(v).matches()) {
+        numbers++;
+      }
       if (!NonAnswers.isNonAnswer(v)) {
         substantive++;
         length += v.length();
@@ -94,7 +126,7 @@ final class ColumnProfile {
         if (words > 1) {
           spaced++;
         }
-        foldedSubstantive.add(f);
+        foldedSubstantive.merge(f, 1, Integer::sum);
       }
     }
     this.filled = filled;
@@ -105,11 +137,16 @@ final class ColumnProfile {
     this.meanWords = share(wordCount, substantive);
     this.spaceShare = share(spaced, substantive);
     this.variety = share(foldedSubstantive.size(), substantive);
+    this.singletonShare =
+        share(foldedSubstantive.values().stream().filter(c -> c == 1).count(), substantive);
     this.meanFilledLength = share(filledLength, filled);
     this.tokenShare = share(tokens, filled);
     this.digitShare = share(digits, filled);
     this.emailShare = share(emails, filled);
     this.dateShare = share(dates, filled);
+    this.serialShare = share(serials, filled);
+    this.yesNoShare = share(yesNo, filled);
+    this.numberShare = share(numbers, filled);
   }
 
   private static double share(long part, long whole) {

@@ -131,8 +131,44 @@ final class HeaderWords {
           "qty",
           "count");
 
+  /** First words of a header that asks something. */
+  private static final Set<String> QUESTION_STARTS =
+      Set.of(
+          "what",
+          "whats",
+          "why",
+          "how",
+          "which",
+          "anything",
+          "anyone",
+          "any",
+          "is",
+          "was",
+          "were",
+          "are",
+          "did",
+          "do",
+          "does",
+          "would",
+          "could",
+          "can",
+          "should",
+          "will",
+          "tell",
+          "describe",
+          "explain",
+          "please",
+          "where",
+          "who",
+          "if",
+          "in");
+
+  /** Two-word starts of a header that asks something ("in" alone starts "In stock"). */
+  private static final Set<String> QUESTION_PAIRS = Set.of("in your", "if you", "if there");
+
   private final String joined;
   private final List<String> words;
+  private final boolean asks;
 
   HeaderWords(String header) {
     StringBuilder sb = new StringBuilder(header.length());
@@ -143,6 +179,23 @@ final class HeaderWords {
     String[] parts = sb.toString().toLowerCase(Locale.ROOT).strip().split(" +");
     this.words = parts.length == 1 && parts[0].isEmpty() ? List.of() : Arrays.asList(parts);
     this.joined = String.join(" ", words);
+    String first = words.isEmpty() ? "" : words.get(0);
+    boolean pairOnly = first.equals("in") || first.equals("if");
+    this.asks =
+        header.strip().endsWith("?")
+            || (words.size() >= 3
+                && (pairOnly
+                    ? QUESTION_PAIRS.contains(first + " " + words.get(1))
+                    : QUESTION_STARTS.contains(first)));
+  }
+
+  /**
+   * Header worded as a question: it ends in a question mark, or it has three words or more and
+   * starts as a question or a request does ({@code What made you choose us}, {@code Tell us why},
+   * {@code In your own words}). Such a column is a question even when its answers are short.
+   */
+  boolean isQuestion() {
+    return asks;
   }
 
   /** Header such as {@code id}, {@code Respondent ID}, {@code Response #}. */

@@ -47,6 +47,7 @@ public final class ImportSettings {
   private final long maxBytes;
   private final int maxProblems;
   private final int maxColumns;
+  private final Optional<DateOrder> dateOrder;
 
   private ImportSettings(Builder b) {
     this.delimiter = Optional.ofNullable(b.delimiter);
@@ -61,6 +62,12 @@ public final class ImportSettings {
     this.maxBytes = b.maxBytes;
     this.maxProblems = b.maxProblems;
     this.maxColumns = b.maxColumns;
+    this.dateOrder = Optional.ofNullable(b.dateOrder);
+  }
+
+  /** Whether numeric dates are day-first or month-first; empty to decide from the date column. */
+  public Optional<DateOrder> dateOrder() {
+    return dateOrder;
   }
 
   /** Returns a builder with every option on auto and the default limits. */
@@ -190,8 +197,19 @@ public final class ImportSettings {
     private long maxBytes = DEFAULT_MAX_BYTES;
     private int maxProblems = DEFAULT_MAX_PROBLEMS;
     private int maxColumns = DEFAULT_MAX_COLUMNS;
+    private DateOrder dateOrder;
 
     private Builder() {}
+
+    /**
+     * Sets the order of numeric dates.
+     *
+     * @param order day-first or month-first, or null to decide from the date column
+     */
+    public Builder dateOrder(DateOrder order) {
+      this.dateOrder = order;
+      return this;
+    }
 
     /**
      * Sets the delimiter.

@@ -28,19 +28,25 @@ import riffle.model.ColumnRole;
  *       and not under a score or rating header.
  *   <li><b>DATE</b>, one column at most: the leftmost header with the word date, time, timestamp,
  *       submitted, created, completed, started, finished, answered or when whose values are at
- *       least half dates or date-times; else the leftmost column whose values are at least 80%
- *       dates or date-times.
+ *       least half dates or date-times (or 90% spreadsheet serial dates); else the leftmost column
+ *       whose values are at least 80% dates or date-times.
  *   <li><b>IGNORED</b> when empty in the sample, or personal data: a header such as name, e-mail,
  *       phone, mobile, address or IP, or at least half the values shaped like e-mail addresses.
- *   <li><b>TEXT</b>: free text, measured on the answers that are not {@link NonAnswers}: at least
- *       one, a mean length of at least {@value #TEXT_MEAN_LENGTH} characters and of at least
- *       {@value #TEXT_MEAN_WORDS} words, at least half holding a space, and at least 60% distinct.
+ *   <li><b>TEXT</b>: a header worded as a question ({@link HeaderWords#isQuestion}) over answers
+ *       that are not all yes/no or numbers, however short and repeated ("What made you choose us?"
+ *       answered "Price", "Fast delivery"); or free text, measured on the answers that are not
+ *       {@link NonAnswers}: at least one, a mean length of at least {@value #TEXT_MEAN_LENGTH}
+ *       characters and of at least {@value #TEXT_MEAN_WORDS} words, at least half holding a space,
+ *       and at least 60% distinct.
  *   <li><b>META</b>: few distinct values, at most min(50, max(5, half the filled values)), with a
  *       mean length of at most {@value #META_MEAN_LENGTH} characters: device, customer type, order
- *       value band, country, plan.
+ *       value band, country, plan, a yes/no question, a rating.
  *   <li><b>IGNORED</b> otherwise: many distinct short values, such as names, order numbers or free
  *       numbers; they are not kept.
  * </ol>
+ *
+ * <p>Every column gets the reason for its role, in words: the import prints them and the page's
+ * preview shows them, so that no question is left out unseen.
  *
  * <p>A CODES column belongs to the nearest TEXT column on its left, else to the first TEXT column.
  */
@@ -49,6 +55,12 @@ final class RoleDetector {
   static final int TEXT_MEAN_LENGTH = 15;
   static final int TEXT_MEAN_WORDS = 3;
   static final int META_MEAN_LENGTH = 40;
+
+  /**
+   * Most distinct answers a question's column may have and still read as a choice among set answers
+   * (a segment) rather than answers in the buyers' own words.
+   */
+  static final int MAX_CHOICES = 12;
 
   private static final int MAX_LISTED = 30;
 
@@ -101,6 +113,7 @@ final class RoleDetector {
       throws BadInput {
     int n = names.length;
     ColumnRole[] roles = named.clone();
+    String[] reasons = new String[n];
     boolean[] detected = new boolean[n];
     Set<ColumnRole> off = EnumSet.noneOf(ColumnRole.class);
     for (ColumnRole r : named) {
@@ -114,6 +127,9 @@ final class RoleDetector {
       words[i] = new HeaderWords(names[i]);
       profiles[i] = new ColumnProfile(sample, i);
       detected[i] = roles[i] == null;
+      if (!detected[i]) {
+        reasons[i] = "as named in the import settings";
+      }
     }
     for (int i = 0; i < n; i++) {
       if (roles[i] != null) {
@@ -121,26 +137,34 @@ final class RoleDetector {
       }
       if (!off.contains(ColumnRole.CODER) && words[i].isCoder()) {
         roles[i] = ColumnRole.CODER;
+        reasons[i] = "the header names a coder";
       } else if (!off.contains(ColumnRole.CODES) && words[i].isCodes()) {
         roles[i] = ColumnRole.CODES;
+        reasons[i] = "the header names codes";
       }
     }
     if (!off.contains(ColumnRole.ID)) {
-      pickId(names, words, profiles, roles);
+      pickId(names, words, profiles, roles, reasons);
     }
     if (!off.contains(ColumnRole.DATE)) {
-      pickDate(words, profiles, roles);
+      pickDate(words, profiles, roles, reasons);
     }
     for (int i = 0; i < n; i++) {
       if (roles[i] == null) {
-        roles[i] = byValues(words[i], profiles[i], off);
+        Verdict v = byValues(words[i], profiles[i], off);
+        roles[i] = v.role();
+        reasons[i] = v.reason();
       }
     }
-    return columns(names, roles, detected, line);
+    return columns(names, roles, reasons, detected, line);
   }
 
   private static void pickId(
-      String[] names, HeaderWords[] words, ColumnProfile[] p, ColumnRole[] roles) {
+      String[] names,
+      HeaderWords[] words,
+      ColumnProfile[] p,
+      ColumnRole[] roles,
+      String[] reasons) {
     int best = -1;
     int bestRank = Integer.MAX_VALUE;
     for (int i = 0; i < roles.length; i++) {
@@ -170,10 +194,17 @@ final class RoleDetector {
     }
     if (best >= 0) {
       roles[best] = ColumnRole.ID;
+      reasons[best] =
+          switch (bestRank) {
+            case 1 -> "the header names an id";
+            case 2 -> "unique values under a header ending in id";
+            default -> "unique single values with digits, the first such column";
+          };
     }
   }
 
-  private static void pickDate(HeaderWords[] words, ColumnProfile[] p, ColumnRole[] roles) {
+  private static void pickDate(
+      HeaderWords[] words, ColumnProfile[] p, ColumnRole[] roles, String[] reasons) {
     int best = -1;
     int bestRank = Integer.MAX_VALUE;
     for (int i = 0; i < roles.length; i++) {
@@ -181,7 +212,7 @@ final class RoleDetector {
         continue;
       }
       int rank;
-      if (words[i].isDate() && p[i].dateShare >= 0.5) {
+      if (words[i].isDate() && (p[i].dateShare >= 0.5 || p[i].serialShare >= 0.9)) {
         rank = 1;
       } else if (p[i].dateShare >= 0.8) {
         rank = 2;
@@ -195,12 +226,40 @@ final class RoleDetector {
     }
     if (best >= 0) {
       roles[best] = ColumnRole.DATE;
+      reasons[best] =
+          p[best].dateShare < 0.5
+              ? "spreadsheet serial dates under a date header"
+              : percent(p[best].dateShare)
+                  + " of its values are dates"
+                  + (bestRank == 1 ? " under a date header" : "");
     }
   }
 
-  private static ColumnRole byValues(HeaderWords words, ColumnProfile p, Set<ColumnRole> off) {
-    if (p.filled == 0 || words.isPersonal() || p.emailShare >= 0.5) {
-      return ColumnRole.IGNORED;
+  /** A detected role and why. */
+  private record Verdict(ColumnRole role, String reason) {}
+
+  private static Verdict byValues(HeaderWords words, ColumnProfile p, Set<ColumnRole> off) {
+    if (p.filled == 0) {
+      return new Verdict(ColumnRole.IGNORED, "empty in the first rows");
+    }
+    if (words.isPersonal()) {
+      return new Verdict(ColumnRole.IGNORED, "personal data, by its header");
+    }
+    if (p.emailShare >= 0.5) {
+      return new Verdict(ColumnRole.IGNORED, "personal data: e-mail addresses");
+    }
+    boolean closed = p.yesNoShare + p.numberShare >= 0.9;
+    boolean choices =
+        p.distinct <= MAX_CHOICES
+            && p.singletonShare < 0.05
+            && p.substantive >= 2 * p.distinct
+            && p.meanFilledLength <= META_MEAN_LENGTH;
+    if (words.isQuestion() && p.substantive >= 1 && !closed && !choices) {
+      return text(
+          off,
+          p.variety >= 0.6 || p.meanWords >= TEXT_MEAN_WORDS
+              ? "the header asks a question"
+              : "the header asks a question; short repeated answers kept as its answers");
     }
     boolean text =
         p.substantive >= 1
@@ -209,19 +268,48 @@ final class RoleDetector {
             && p.spaceShare >= 0.5
             && p.variety >= 0.6;
     if (text) {
-      return off.contains(ColumnRole.TEXT) ? ColumnRole.IGNORED : ColumnRole.TEXT;
+      return text(off, String.format(Locale.ROOT, "free text, %.0f words on average", p.meanWords));
     }
     int metaLimit = Math.min(50, Math.max(5, p.filled / 2));
     if (!off.contains(ColumnRole.META)
         && p.distinct <= metaLimit
         && p.meanFilledLength <= META_MEAN_LENGTH) {
-      return ColumnRole.META;
+      String what =
+          p.yesNoShare >= 0.9
+              ? "yes/no answers"
+              : p.numberShare >= 0.9
+                  ? "numbers"
+                  : words.isQuestion()
+                      ? "set answers, each given by several rows"
+                      : "values such as a device, a plan or a country";
+      return new Verdict(
+          ColumnRole.META,
+          (p.distinct == 1 ? "one value" : p.distinct + " distinct " + what)
+              + ": kept as a segment");
     }
-    return ColumnRole.IGNORED;
+    return new Verdict(
+        ColumnRole.IGNORED,
+        String.format(
+            Locale.ROOT,
+            "%d distinct short values, %.0f characters on average, like names or order numbers;"
+                + " name it as a text column to keep it as a question",
+            p.distinct,
+            p.meanFilledLength));
+  }
+
+  private static Verdict text(Set<ColumnRole> off, String reason) {
+    return off.contains(ColumnRole.TEXT)
+        ? new Verdict(ColumnRole.IGNORED, reason + "; not kept, as the text columns were named")
+        : new Verdict(ColumnRole.TEXT, reason);
+  }
+
+  private static String percent(double share) {
+    return String.format(Locale.ROOT, "%.0f%%", share * 100);
   }
 
   private static List<Column> columns(
-      String[] names, ColumnRole[] roles, boolean[] detected, long line) throws BadInput {
+      String[] names, ColumnRole[] roles, String[] reasons, boolean[] detected, long line)
+      throws BadInput {
     int firstText = -1;
     for (int i = 0; i < roles.length && firstText < 0; i++) {
       if (roles[i] == ColumnRole.TEXT) {
@@ -232,7 +320,9 @@ final class RoleDetector {
       throw new BadInput(
           line,
           0,
-          "no open-text column found; columns: " + listed(names) + "; name the text column",
+          "no open-text column found; columns: "
+              + explained(names, reasons)
+              + "; name the text column",
           "text column");
     }
     List<Column> columns = new ArrayList<>(roles.length);
@@ -242,7 +332,7 @@ final class RoleDetector {
         lastText = i;
       }
       int answers = roles[i] == ColumnRole.CODES ? (lastText >= 0 ? lastText : firstText) : -1;
-      columns.add(new Column(i, names[i], roles[i], detected[i], answers));
+      columns.add(new Column(i, names[i], roles[i], detected[i], answers, reasons[i]));
     }
     return columns;
   }
@@ -265,6 +355,23 @@ final class RoleDetector {
       }
     }
     return found;
+  }
+
+  /** The columns with the reasons for their roles, as many as {@link #listed} names. */
+  private static String explained(String[] names, String[] reasons) {
+    StringBuilder sb = new StringBuilder();
+    for (int i = 0; i < names.length && i < MAX_LISTED; i++) {
+      sb.append(i == 0 ? "" : ", ")
+          .append('\'')
+          .append(names[i])
+          .append("' (")
+          .append(reasons[i])
+          .append(')');
+    }
+    if (names.length > MAX_LISTED) {
+      sb.append(" and ").append(names.length - MAX_LISTED).append(" more");
+    }
+    return sb.toString();
   }
 
   private static String listed(String[] names) {

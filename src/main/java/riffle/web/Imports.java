@@ -57,6 +57,7 @@ final class Imports implements AutoCloseable {
       String paste,
       String delimiter,
       String encoding,
+      String dateOrder,
       List<ColumnChoice> columns,
       String wave,
       String date,
@@ -247,6 +248,11 @@ final class Imports implements AutoCloseable {
       b.encoding(Optional.ofNullable(s.encoding()).orElse("auto"));
     } catch (InputException e) {
       throw ApiError.badField("encoding", e.getMessage());
+    }
+    try {
+      b.dateOrder(s.dateOrder());
+    } catch (InputException e) {
+      throw ApiError.badField("date_order", e.getMessage());
     }
     if (s.wave() != null) {
       if (s.wave().isBlank()) {

@@ -174,9 +174,12 @@ class RoleDetectorTest {
             UnreadableInputException.class,
             () ->
                 Csv.read(csv("id,Main reason,device", i -> "K" + i + "," + words[i] + ",mobile")));
+    // The message says why each column is what it is, and how to keep the short answers.
     assertEquals(
-        "test.csv:1: no open-text column found; columns: 'id', 'Main reason', 'device'; name the"
-            + " text column",
+        "test.csv:1: no open-text column found; columns: 'id' (the header names an id), 'Main"
+            + " reason' (8 distinct short values, 7 characters on average, like names or order"
+            + " numbers; name it as a text column to keep it as a question), 'device' (one value:"
+            + " kept as a segment); name the text column",
         e.getMessage());
     assertEquals(java.util.Optional.of("text column"), e.problem().setting());
   }
