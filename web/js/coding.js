@@ -3,7 +3,7 @@
 // object), coding-load.js (reading answers and codes), coding-changes.js (the queue of changes),
 // coding-keys.js (the keyboard), coding-suggestions.js, coding-bulk.js (all at once) and
 // coding-draw.js (drawing).
-import { h, fill } from './dom.js';
+import { h, fill, questionOptions } from './dom.js';
 import { coderBar, onCoder } from './coder.js';
 import { orderChoice } from './queue.js';
 import { segmentPicker } from './segments.js';
@@ -99,6 +99,6 @@ function fillChoices(summary) {
   fill(
     els.question,
     h('option', { value: '' }, 'All questions'),
-    summary.questions.map((text, i) => h('option', { value: String(i + 1), props: { selected: q === String(i + 1) } }, `${i + 1}. ${text}`)),
+    questionOptions(summary, q),
   );
 }

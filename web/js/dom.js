@@ -80,3 +80,15 @@ export function position(where) {
   if (where.column > 0) parts.push(`column ${where.column}`);
   return parts.join(', ');
 }
+
+/** One option per question of the project summary, numbered, with its short name when it has one. */
+export function questionOptions(summary, selected) {
+  const names = summary.question_names || {};
+  return summary.questions.map((text, i) =>
+    h(
+      'option',
+      { value: String(i + 1), props: { selected: selected === String(i + 1) } },
+      `${i + 1}. ${names[text] ? names[text] + ': ' : ''}${text}`,
+    ),
+  );
+}

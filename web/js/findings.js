@@ -2,7 +2,7 @@
 // code's share over the waves with its interval, the codes that come together, and whether coding
 // has found (nearly) all the codes there are. The charts are drawn in findings-charts.js.
 import { api, query } from './api.js';
-import { h, fill, count, plural } from './dom.js';
+import { h, fill, count, plural, questionOptions } from './dom.js';
 import { segmentPicker } from './segments.js';
 import { svg, shareChart, heatmap, saturation, pct, pValue, projection } from './findings-charts.js';
 
@@ -49,7 +49,7 @@ function fillChoices(summary) {
   const q = els.question.value;
   const f = els.from.value;
   const t = els.to.value;
-  fill(els.question, h('option', { value: '' }, 'All questions'), summary.questions.map((text, i) => h('option', { value: String(i + 1), props: { selected: q === String(i + 1) } }, `${i + 1}. ${text}`)));
+  fill(els.question, h('option', { value: '' }, 'All questions'), questionOptions(summary, q));
   fill(els.from, h('option', { value: '' }, 'each wave'), summary.waves.map((w) => h('option', { value: w.name, props: { selected: f === w.name } }, w.name)));
   fill(els.to, h('option', { value: '' }, 'the next'), summary.waves.map((w) => h('option', { value: w.name, props: { selected: t === w.name } }, w.name)));
 }

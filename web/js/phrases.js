@@ -1,7 +1,7 @@
 // Phrases: what buyers keep saying in their own words, the themes that travel together, and what
 // rose or fell between two waves; every phrase leads to its answers.
 import { api, query } from './api.js';
-import { h, fill, clear, count, plural, position } from './dom.js';
+import { h, fill, clear, count, plural, position, questionOptions } from './dom.js';
 import { current as coderName } from './coder.js';
 import { segmentPicker } from './segments.js';
 
@@ -53,7 +53,7 @@ function fillChoices(summary) {
   fill(
     els.question,
     h('option', { value: '' }, 'All questions'),
-    summary.questions.map((text, i) => h('option', { value: String(i + 1), props: { selected: q === String(i + 1) } }, `${i + 1}. ${text}`)),
+    questionOptions(summary, q),
   );
   fill(els.wave, h('option', { value: '' }, 'All waves'), summary.waves.map((x) => h('option', { value: x.name, props: { selected: w === x.name } }, x.name)));
   fill(els.against, h('option', { value: '' }, 'No comparison'), summary.waves.map((x) => h('option', { value: x.name, props: { selected: a === x.name } }, x.name)));

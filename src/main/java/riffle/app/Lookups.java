@@ -2,6 +2,7 @@ package riffle.app;
 
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import riffle.model.SettingException;
 
 /**
@@ -29,11 +30,12 @@ final class Lookups {
   }
 
   /**
-   * The text of the question {@code given} names, by its number (from 1) or its text in any case.
+   * The text of the question {@code given} names, by its number (from 1), its text or its short
+   * name ({@code names}, by text) in any case.
    *
    * @throws SettingException naming the question setting when the project has no such question
    */
-  static String question(String given, List<String> questions) {
+  static String question(String given, List<String> questions, Map<String, String> names) {
     String q = given.strip();
     if (q.matches("\\d+")) {
       int n = Integer.parseInt(q);
@@ -46,11 +48,28 @@ final class Lookups {
         return text;
       }
     }
+    for (String text : questions) {
+      String name = names.get(text);
+      if (name != null && name.toLowerCase(Locale.ROOT).equals(q.toLowerCase(Locale.ROOT))) {
+        return text;
+      }
+    }
     StringBuilder list = new StringBuilder();
     for (int i = 0; i < questions.size(); i++) {
-      list.append(i == 0 ? "" : "; ").append(i + 1).append(" = ").append(questions.get(i));
+      String name = names.get(questions.get(i));
+      list.append(i == 0 ? "" : "; ")
+          .append(i + 1)
+          .append(" = ")
+          .append(name == null ? "" : name + ": ")
+          .append(questions.get(i));
     }
     throw new SettingException(
-        "question", "no question \"" + given + "\"; give its number or text: " + list);
+        "question",
+        "no question \""
+            + given
+            + "\"; give its number, "
+            + (names.isEmpty() ? "" : "name ")
+            + "or text: "
+            + list);
   }
 }

@@ -34,7 +34,8 @@ final class PhraseMining {
     Optional<String> wave = q.wave().map(w -> Lookups.wave(w, waves, "wave"));
     Optional<String> against = q.against().map(w -> Lookups.wave(w, waves, "against"));
     List<String> questions = store.questions();
-    Optional<String> question = q.question().map(x -> Lookups.question(x, questions));
+    Optional<String> question =
+        q.question().map(x -> Lookups.question(x, questions, store.questionNames()));
 
     PhraseFilter focus = PhraseFilter.all();
     if (wave.isPresent()) {

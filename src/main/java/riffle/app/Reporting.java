@@ -50,7 +50,8 @@ public final class Reporting {
 
   private Loaded load(Optional<String> question) throws InputException {
     List<String> questions = store.questions();
-    Optional<String> only = question.map(q -> Lookups.question(q, questions));
+    Optional<String> only =
+        question.map(q -> Lookups.question(q, questions, store.questionNames()));
     List<String> waves = store.waveNames();
     List<ProjectStore.AnswerRow> rows = store.answerRows(List.of(), only);
     List<Long> ids = new ArrayList<>(rows.size());

@@ -214,7 +214,7 @@ public final class ReviewQueues {
   private Resolved resolve(QueueKey key) throws InputException {
     String wave = Lookups.wave(key.wave(), store.waveNames(), "wave");
     List<String> questions = store.questions();
-    String question = Lookups.question(key.question(), questions);
+    String question = Lookups.question(key.question(), questions, store.questionNames());
     int number = questions.indexOf(question) + 1;
     if (key.segmentColumn().isEmpty()) {
       return new Resolved(wave, question, number, "", "");

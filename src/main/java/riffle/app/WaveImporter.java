@@ -103,6 +103,12 @@ final class WaveImporter {
 
     List<Column> texts = table.columnsWith(ColumnRole.TEXT);
     List<String> questions = texts.stream().map(Column::header).toList();
+    Map<String, String> questionNames = new LinkedHashMap<>();
+    for (Column t : texts) {
+      if (!t.name().isEmpty()) {
+        questionNames.put(t.header(), t.name());
+      }
+    }
     List<NewRespondent> respondents =
         respondents(table, texts, store.storedTexts(wave), analysed, progress);
     WaveBatch batch =
@@ -116,6 +122,7 @@ final class WaveImporter {
             table.rows().size() + table.skippedRows(),
             table.skippedRows(),
             questions,
+            questionNames,
             respondents,
             request.actor(),
             AnalysisCodec.VERSION);

@@ -44,7 +44,8 @@ final class SummaryText {
     if (!s.questions().isEmpty()) {
       out.println("  questions:");
       for (String q : s.questions()) {
-        out.println("    " + q);
+        String name = s.questionNames().get(q);
+        out.println("    " + (name == null ? q : name + ": " + q));
       }
     }
   }

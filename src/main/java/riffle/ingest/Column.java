@@ -9,6 +9,8 @@ import riffle.model.ColumnRole;
  * @param index the 0-based position of the column in the export
  * @param header the header name, trimmed; blank headers are called {@code Column N} and repeated
  *     ones get a {@code " (2)"} suffix, so headers are unique within a table
+ * @param name the question's short name from a first header row above its wording ({@code Q2} above
+ *     {@code What made you choose us?}); empty when the export has one header row
  * @param role what the column holds
  * @param detected true when the role was detected, false when the analyst named the column
  * @param answersColumn for a {@link ColumnRole#CODES} column, the index of the {@link
@@ -17,8 +19,15 @@ import riffle.model.ColumnRole;
  *     the page's preview ("free text: 8 words on average")
  */
 public record Column(
-    int index, String header, ColumnRole role, boolean detected, int answersColumn, String reason) {
+    int index,
+    String header,
+    String name,
+    ColumnRole role,
+    boolean detected,
+    int answersColumn,
+    String reason) {
   public Column {
+    Objects.requireNonNull(name, "name");
     Objects.requireNonNull(reason, "reason");
     if (index < 0) {
       throw new IllegalArgumentException("index must be >= 0, got " + index);

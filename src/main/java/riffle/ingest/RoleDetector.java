@@ -70,17 +70,22 @@ final class RoleDetector {
    * Finds the columns the settings name.
    *
    * @param names the unique header names
+   * @param shortNames the questions' short names above their wording, empty strings without
    * @param settings the import settings
    * @param line the header's line, for messages
    * @return the role of each named column, by index; null for columns not named
    * @throws BadInput when a named column is not in the header
    */
-  static ColumnRole[] named(String[] names, ImportSettings settings, long line) throws BadInput {
+  static ColumnRole[] named(String[] names, String[] shortNames, ImportSettings settings, long line)
+      throws BadInput {
     ColumnRole[] roles = new ColumnRole[names.length];
     for (Map.Entry<String, List<String>> e : settings.namedColumns().entrySet()) {
       ColumnRole role = roleOf(e.getKey());
       for (String wanted : e.getValue()) {
         int i = find(names, wanted);
+        if (i < 0) {
+          i = find(shortNames, wanted);
+        }
         if (i < 0) {
           throw new BadInput(
               line,
@@ -104,12 +109,14 @@ final class RoleDetector {
    * Gives every column its role.
    *
    * @param names the unique header names
+   * @param shortNames the questions' short names above their wording, empty strings without
    * @param named the roles of named columns, null for the others
    * @param sample the first rows kept
    * @param line the header's line, for messages
    * @throws BadInput when no column holds open text
    */
-  static List<Column> detect(String[] names, ColumnRole[] named, List<SurveyRow> sample, long line)
+  static List<Column> detect(
+      String[] names, String[] shortNames, ColumnRole[] named, List<SurveyRow> sample, long line)
       throws BadInput {
     int n = names.length;
     ColumnRole[] roles = named.clone();
@@ -156,7 +163,7 @@ final class RoleDetector {
         reasons[i] = v.reason();
       }
     }
-    return columns(names, roles, reasons, detected, line);
+    return columns(names, shortNames, roles, reasons, detected, line);
   }
 
   private static void pickId(
@@ -308,7 +315,12 @@ final class RoleDetector {
   }
 
   private static List<Column> columns(
-      String[] names, ColumnRole[] roles, String[] reasons, boolean[] detected, long line)
+      String[] names,
+      String[] shortNames,
+      ColumnRole[] roles,
+      String[] reasons,
+      boolean[] detected,
+      long line)
       throws BadInput {
     int firstText = -1;
     for (int i = 0; i < roles.length && firstText < 0; i++) {
@@ -332,7 +344,8 @@ final class RoleDetector {
         lastText = i;
       }
       int answers = roles[i] == ColumnRole.CODES ? (lastText >= 0 ? lastText : firstText) : -1;
-      columns.add(new Column(i, names[i], roles[i], detected[i], answers, reasons[i]));
+      columns.add(
+          new Column(i, names[i], shortNames[i], roles[i], detected[i], answers, reasons[i]));
     }
     return columns;
   }

@@ -67,14 +67,28 @@ final class TableParser {
               width),
           "max columns");
     }
-    String[] names = HeaderNames.of(header.cells(), width, header.line(), problems);
-    ColumnRole[] named = RoleDetector.named(names, settings, header.line());
+    // A second header row with each question's wording: the wording names the column, and the
+    // short name above it is kept as the question's name.
+    boolean worded =
+        h + 1 < records.size() && WordingRow.follows(header.cells(), records.get(h + 1).cells());
+    String[] shortNames = new String[width];
+    String[] headers = new String[width];
+    for (int i = 0; i < width; i++) {
+      String name = i < header.cells().length ? HeaderNames.collapse(header.cells()[i]) : "";
+      String[] below = worded ? records.get(h + 1).cells() : new String[0];
+      String wording = i < below.length ? HeaderNames.collapse(below[i]) : "";
+      shortNames[i] = worded && !wording.isEmpty() ? name : "";
+      headers[i] = shortNames[i].isEmpty() ? name : wording;
+    }
+    String[] names = HeaderNames.of(headers, width, header.line(), problems);
+    ColumnRole[] named = RoleDetector.named(names, shortNames, settings, header.line());
+    int first = worded ? h + 2 : h + 1;
 
     List<SurveyRow> rows = new ArrayList<>(Math.max(16, records.size() - h - 1));
     int ragged = 0;
     int blank = 0;
     int trailingBlank = 0;
-    for (int r = h + 1; r < records.size(); r++) {
+    for (int r = first; r < records.size(); r++) {
       CsvRecords.Raw rec = records.get(r);
       String[] cells = rec.cells();
       if (isBlank(cells)) {
@@ -84,7 +98,7 @@ final class TableParser {
       }
       trailingBlank = 0;
       if (fits(cells, width, header.cells())) {
-        rows.add(new SurveyRow(r - h, rec.line(), List.of(fit(cells, width))));
+        rows.add(new SurveyRow(r - first + 1, rec.line(), List.of(fit(cells, width))));
       } else {
         ragged++;
         problems.add(rec.line(), 0, raggedMessage(cells, width, rec.line()));
@@ -122,7 +136,7 @@ final class TableParser {
       }
     }
     List<SurveyRow> sample = rows.subList(0, Math.min(rows.size(), RoleDetector.SAMPLE));
-    List<Column> columns = RoleDetector.detect(names, named, sample, header.line());
+    List<Column> columns = RoleDetector.detect(names, shortNames, named, sample, header.line());
     checkCodeNames(columns, rows);
     return new SurveyTable(
         in.source(),

@@ -2,6 +2,7 @@ package riffle.model;
 
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 
 /**
@@ -16,6 +17,7 @@ import java.util.Objects;
  * @param rows data rows read, skipped ones included
  * @param skipped rows left out (ragged or blank)
  * @param questions the open-text questions, in column order
+ * @param questionNames the questions' short names, by question, for those the export names
  * @param respondents the rows, one respondent each
  * @param actor who ran the import
  * @param analysedWith the version of the text analysis that analysed the answers
@@ -30,6 +32,7 @@ public record WaveBatch(
     int rows,
     int skipped,
     List<String> questions,
+    Map<String, String> questionNames,
     List<NewRespondent> respondents,
     String actor,
     String analysedWith) {
@@ -41,6 +44,7 @@ public record WaveBatch(
     Objects.requireNonNull(encoding, "encoding");
     Objects.requireNonNull(delimiter, "delimiter");
     questions = List.copyOf(questions);
+    questionNames = Map.copyOf(questionNames);
     respondents = List.copyOf(respondents);
     Objects.requireNonNull(actor, "actor");
     Objects.requireNonNull(analysedWith, "analysedWith");

@@ -42,7 +42,7 @@ final class BatchWriter {
     long waveId = waveId(batch);
     Map<String, Long> questionIds = new HashMap<>();
     for (String q : batch.questions()) {
-      questionIds.put(q, questionId(q));
+      questionIds.put(q, questionId(q, batch.questionNames().get(q)));
     }
     long batchId = insertBatch(waveId, batch);
     int respondentsAdded = 0;
@@ -227,14 +227,25 @@ final class BatchWriter {
             now);
   }
 
-  private long questionId(String text) throws SQLException {
+  /** A question's id, adding it when new; a name is kept when the question has none yet. */
+  private long questionId(String text, String name) throws SQLException {
     long id = find("SELECT id FROM question WHERE text = ?", text);
-    return id >= 0
-        ? id
-        : insert(
-            "INSERT INTO question (text, position)"
-                + " VALUES (?, (SELECT coalesce(max(position), 0) + 1 FROM question))",
-            text);
+    if (id < 0) {
+      id =
+          insert(
+              "INSERT INTO question (text, position)"
+                  + " VALUES (?, (SELECT coalesce(max(position), 0) + 1 FROM question))",
+              text);
+    }
+    if (name != null) {
+      try (PreparedStatement ps =
+          c.prepareStatement("UPDATE question SET name = ? WHERE id = ? AND name IS NULL")) {
+        ps.setString(1, name);
+        ps.setLong(2, id);
+        ps.executeUpdate();
+      }
+    }
+    return id;
   }
 
   /** Finds a code by name, ignoring case, or adds it to the codebook marked as imported. */

@@ -25,7 +25,8 @@ final class Migrations {
           "V3__coding.sql",
           "V4__board.sql",
           "V5__review.sql",
-          "V6__queue.sql");
+          "V6__queue.sql",
+          "V7__question_names.sql");
 
   private Migrations() {}
 

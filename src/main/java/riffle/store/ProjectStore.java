@@ -350,6 +350,11 @@ public final class ProjectStore implements AutoCloseable {
     return read(SummaryQueries::questions);
   }
 
+  /** The questions' short names from two-row headers, by question, in question order. */
+  public Map<String, String> questionNames() throws ProjectFileException {
+    return read(SummaryQueries::questionNames);
+  }
+
   /**
    * A substantive answer as phrase mining reads it.
    *

@@ -7,8 +7,10 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import riffle.model.ProjectSummary;
 import riffle.model.WaveSummary;
@@ -45,6 +47,7 @@ final class SummaryQueries {
     return new ProjectSummary(
         waves,
         questions(c),
+        questionNames(c),
         count(c, "SELECT count(*) FROM respondent"),
         count(c, "SELECT count(*) FROM answer"),
         count(c, "SELECT count(*) FROM answer WHERE substantive = 1"),
@@ -62,6 +65,20 @@ final class SummaryQueries {
       }
     }
     return questions;
+  }
+
+  /** The questions' short names, by question text, for the questions that have one. */
+  static Map<String, String> questionNames(Connection c) throws SQLException {
+    Map<String, String> names = new LinkedHashMap<>();
+    try (Statement s = c.createStatement();
+        ResultSet rs =
+            s.executeQuery(
+                "SELECT text, name FROM question WHERE name IS NOT NULL ORDER BY position")) {
+      while (rs.next()) {
+        names.put(rs.getString(1), rs.getString(2));
+      }
+    }
+    return names;
   }
 
   static int count(Connection c, String sql) throws SQLException {

@@ -50,11 +50,17 @@ class ShortAnswersImportTest {
   };
 
   private Path export(String name, String separator) throws IOException {
+    return export(name, separator, "");
+  }
+
+  /** The export, with {@code names} as a first header row above the questions' wording. */
+  private Path export(String name, String separator, String names) throws IOException {
     Random random = new Random(18L);
     StringBuilder sb =
-        new StringBuilder(
-            "Respondent,Completed,What almost stopped you from buying?,What made you choose us?"
-                + ",Did you use a discount code?\n");
+        new StringBuilder(names)
+            .append(
+                "Respondent,Completed,What almost stopped you from buying?,What made you choose us?"
+                    + ",Did you use a discount code?\n");
     for (int i = 0; i < 150; i++) {
       int day = 1 + random.nextInt(28);
       int month = 1 + random.nextInt(2);
@@ -108,6 +114,19 @@ class ShortAnswersImportTest {
     String info = ok("info", "--project", project).out();
     assertTrue(info.contains("What made you choose us?"), info);
     assertTrue(info.contains("What almost stopped you from buying?"), info);
+  }
+
+  @Test
+  void aFirstHeaderRowOfShortNamesIsKeptAsTheQuestionsNames() throws IOException {
+    Path file = export("named.csv", ".", "resp_id,end_date,Q1,Q2,Q3\n");
+    String project = dir.resolve("shop.riffle").toString();
+    CliTest.Run run = ok("import", "--project", project, "--file", file.toString());
+    assertTrue(run.out().contains("151 rows read: 302 answers added"), run.out());
+    String info = ok("info", "--project", project).out();
+    assertTrue(info.contains("Q2: What made you choose us?"), info);
+    String phrases = ok("phrases", "--project", project, "--question", "q2").out();
+    assertTrue(phrases.contains("151 answers mined"), phrases);
+    assertTrue(phrases.contains("Price"), phrases);
   }
 
   @Test

@@ -81,6 +81,7 @@ class ProjectStoreTest {
         count,
         0,
         List.of(Q1, Q2),
+        Map.of(),
         respondents,
         "tester",
         "test");
@@ -199,6 +200,7 @@ class ProjectStoreTest {
               51,
               0,
               good.questions(),
+              good.questionNames(),
               rows,
               "tester",
               "test");
@@ -314,6 +316,7 @@ class ProjectStoreTest {
       s.executeUpdate("DROP TABLE answer_read");
       s.executeUpdate("DROP INDEX assignment_by_origin");
       s.executeUpdate("DROP TABLE review_queue");
+      s.executeUpdate("ALTER TABLE question DROP COLUMN name");
       s.executeUpdate("PRAGMA user_version = 4");
     }
     try (ProjectStore store = ProjectStore.openExisting(file)) {
@@ -364,6 +367,7 @@ class ProjectStoreTest {
             3,
             0,
             List.of(Q1, Q2),
+            Map.of(),
             respondents,
             "tester",
             "test");
