@@ -122,6 +122,11 @@ class WebBrowserTest {
         driver.findElement(By.id("bring-readas")).getText());
     WebElement plan = driver.findElement(By.cssSelector("select.role[data-column='plan']"));
     assertEquals("meta", new Select(plan).getFirstSelectedOption().getDomProperty("value"));
+    // Each column says why it has its role before anything is stored.
+    assertEquals(
+        "the header asks a question",
+        driver.findElements(By.cssSelector("#bring-table th .why")).get(2).getText());
+    shot("bring-reasons");
     new Select(plan).selectByValue("ignored");
     waiting().until(d -> !d.findElements(By.cssSelector("#bring-table td.left-out")).isEmpty());
     WebElement wave = driver.findElement(By.id("bring-wave-name"));
