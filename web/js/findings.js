@@ -92,7 +92,7 @@ async function run() {
     const f = await api(`/api/findings${query(params())}`);
     if (mine !== asked) return; // a newer request is on its way
     els.status.textContent = '';
-    fill(els.out, f.questions.map(questionFindings));
+    fill(els.out, f.questions.map((q, i) => questionFindings(q, i, (f.question_names || {})[q.question])));
   } catch (e) {
     if (mine !== asked) return;
     els.status.textContent = '';
@@ -152,7 +152,7 @@ function coverageLine(q) {
   return [entries.map(([w, c]) => `${w} ${coverage(c)}`).join(' \u00b7 '), apart ? ` (${plural(apart, 'non-answer')} counted nowhere)` : ''].join('');
 }
 
-function questionFindings(q, index) {
+function questionFindings(q, index, name) {
   const id = `findings-q${index + 1}`;
   const waves = Object.keys(q.bases);
   const notCompared = q.not_compared || [];
@@ -162,7 +162,7 @@ function questionFindings(q, index) {
   return h(
     'section',
     { class: 'panel findings', 'aria-labelledby': id },
-    h('h2', { id }, q.question),
+    h('h2', { id }, name ? `${name}: ${q.question}` : q.question),
     h('p', { class: 'meta coverage', id: `${id}-coverage` }, 'Answers read by a person: ', coverageLine(q)),
     caution(q) ? h('p', { class: 'hint', id: `${id}-sample` }, caution(q)) : null,
     q.not_coded && q.not_coded.length > 0

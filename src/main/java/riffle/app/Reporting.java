@@ -72,7 +72,7 @@ public final class Reporting {
    *     lacks
    */
   public Findings findings(FindingsQuery query) throws InputException {
-    return findings(load(query.question()), query);
+    return new Findings(findings(load(query.question()), query).questions(), store.questionNames());
   }
 
   /**

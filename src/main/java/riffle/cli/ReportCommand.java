@@ -95,7 +95,7 @@ final class ReportCommand implements Callable<Integer> {
       return 0;
     }
     for (QuestionFindings q : findings.questions()) {
-      print(out, q);
+      print(out, findings.label(q), q);
     }
     if (html != null) {
       out.println("Wrote " + html);
@@ -110,8 +110,8 @@ final class ReportCommand implements Callable<Integer> {
     return String.format(Locale.ROOT, "%.1f%%", 100 * share);
   }
 
-  private static void print(PrintWriter out, QuestionFindings q) {
-    out.println(q.question());
+  private static void print(PrintWriter out, String label, QuestionFindings q) {
+    out.println(label);
     StringBuilder read = new StringBuilder("  Answers read by a person:");
     int nonAnswers = 0;
     for (Map.Entry<String, Coverage> w : q.coverage().entrySet()) {

@@ -62,15 +62,15 @@ final class HtmlReport {
         .append("“imprecise”: interval wider than 20 points (common practice, after the NCHS 2017 ")
         .append("standards for proportions).</p>\n");
     for (QuestionFindings q : findings.questions()) {
-      question(h, q);
+      question(h, findings.label(q), q);
     }
     h.append("</body>\n</html>\n");
     return h.toString();
   }
 
-  private static void question(StringBuilder h, QuestionFindings q) {
+  private static void question(StringBuilder h, String label, QuestionFindings q) {
     h.append("<section>\n<h2>")
-        .append(esc(q.question()))
+        .append(esc(label))
         .append("</h2>\n<p class=\"coverage\">Answers read by a person: ")
         .append(Text.coverageLine(q, " · ", HtmlReport::esc))
         .append("</p>\n");

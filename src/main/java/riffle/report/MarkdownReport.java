@@ -23,13 +23,13 @@ final class MarkdownReport {
         .append("*by rule*. *Small base*: under 30 answers; *imprecise*: interval wider than 20 ")
         .append("points (common practice, after the NCHS 2017 standards for proportions).\n");
     for (QuestionFindings q : findings.questions()) {
-      question(m, q);
+      question(m, findings.label(q), q);
     }
     return m.toString();
   }
 
-  private static void question(StringBuilder m, QuestionFindings q) {
-    m.append("\n## ").append(md(q.question())).append("\n\n");
+  private static void question(StringBuilder m, String label, QuestionFindings q) {
+    m.append("\n## ").append(md(label)).append("\n\n");
     m.append("Answers read by a person: ")
         .append(Text.coverageLine(q, " · ", MarkdownReport::md))
         .append("\n");

@@ -127,6 +127,8 @@ class ShortAnswersImportTest {
     String phrases = ok("phrases", "--project", project, "--question", "q2").out();
     assertTrue(phrases.contains("151 answers mined"), phrases);
     assertTrue(phrases.contains("Price"), phrases);
+    String report = ok("report", "--project", project).out();
+    assertTrue(report.contains("Q2: What made you choose us?"), report);
   }
 
   @Test
