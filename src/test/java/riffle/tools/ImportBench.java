@@ -27,10 +27,11 @@ import org.apache.commons.csv.CSVPrinter;
  * 3): (a) {@link NaiveImport}, Commons CSV and the stock OpenNLP tools one thread in sequence, as
  * {@code java -cp target/riffle.jar:target/test-classes riffle.tools.NaiveImport FILE}, and (b)
  * {@code target/riffle import --project NEW --file FILE} (the launcher) into a fresh project. On
- * the last project it then runs {@code phrases --project P} and {@code info --project P} RUNS times
- * each from a cold JVM. Every run goes through GNU time ({@code /usr/bin/time -v}) for its wall
- * time, CPU time and peak resident memory; the bench prints each run, the medians, the ratio of the
- * median wall times (Riffle over naive) and a markdown table, with the JVM and {@code nproc}.
+ * each run's project it then runs, from cold JVMs, {@code phrases --project P} twice (the first
+ * mines, the second reads the phrases the first kept) and {@code info --project P}. Every run goes
+ * through GNU time ({@code /usr/bin/time -v}) for its wall time, CPU time and peak resident memory;
+ * the bench prints each run, the medians, the ratio of the median wall times (Riffle over naive)
+ * and a markdown table, with the JVM and {@code nproc}.
  *
  * <p>Run from the repository's top folder with {@code mvn -q -o -DskipTests package && mvn -q -o
  * test-compile exec:java -Dexec.mainClass=riffle.tools.ImportBench -Dexec.args="ANSWERS RUNS"} (the
@@ -109,25 +110,30 @@ public final class ImportBench {
             imports.get(run - 1));
       }
       List<Measured> phrases = new ArrayList<>();
+      List<Measured> kept = new ArrayList<>();
       List<Measured> info = new ArrayList<>();
       for (int run = 1; run <= runs; run++) {
+        // Each run's project has not been mined yet: the first phrases mines, the second reads
+        // what the first kept.
+        String mined = str(dir.resolve("run" + run + ".riffle"));
         phrases.add(
-            measure(
-                dir.resolve("phrases.log"), str(LAUNCHER), "phrases", "--project", str(project)));
+            measure(dir.resolve("phrases.log"), str(LAUNCHER), "phrases", "--project", mined));
+        kept.add(measure(dir.resolve("kept.log"), str(LAUNCHER), "phrases", "--project", mined));
         Path infoLog = dir.resolve("info.log");
-        info.add(measure(infoLog, str(LAUNCHER), "info", "--project", str(project)));
+        info.add(measure(infoLog, str(LAUNCHER), "info", "--project", mined));
         if (run == 1) {
           System.out.println("info:\n" + Files.readString(infoLog, StandardCharsets.UTF_8).strip());
         }
         System.out.printf(
             Locale.ROOT,
-            "cold run %d: phrases %s | info %s%n",
+            "cold run %d: phrases %s | phrases again %s | info %s%n",
             run,
             phrases.get(run - 1),
+            kept.get(run - 1),
             info.get(run - 1));
       }
       System.out.println();
-      System.out.println(table(answers, runs, naive, imports, phrases, info));
+      System.out.println(table(answers, runs, naive, imports, phrases, kept, info));
     } finally {
       try (Stream<Path> files = Files.walk(dir)) {
         for (Path p : files.sorted(Comparator.reverseOrder()).toList()) {
@@ -144,6 +150,7 @@ public final class ImportBench {
       List<Measured> naive,
       List<Measured> imports,
       List<Measured> phrases,
+      List<Measured> kept,
       List<Measured> info) {
     double naiveWall = median(naive, Measured::wallSeconds);
     double importWall = median(imports, Measured::wallSeconds);
@@ -151,9 +158,9 @@ public final class ImportBench {
         Locale.ROOT,
         "Medians of %d run%s each (wall time, peak RSS), fresh JVMs:%n%n"
             + "| answers | naive wall | naive RSS | import wall | import RSS | ratio"
-            + " | cold phrases | cold info |%n"
-            + "|---|---|---|---|---|---|---|---|%n"
-            + "| %,d | %.2f s | %s | %.2f s | %s | %.2f | %.2f s, %s | %.2f s, %s |",
+            + " | cold phrases, mined | cold phrases, kept | cold info |%n"
+            + "|---|---|---|---|---|---|---|---|---|%n"
+            + "| %,d | %.2f s | %s | %.2f s | %s | %.2f | %.2f s, %s | %.2f s, %s | %.2f s, %s |",
         runs,
         runs == 1 ? "" : "s",
         answers,
@@ -164,6 +171,8 @@ public final class ImportBench {
         importWall / naiveWall,
         median(phrases, Measured::wallSeconds),
         mib(median(phrases, Measured::peakKb)),
+        median(kept, Measured::wallSeconds),
+        mib(median(kept, Measured::peakKb)),
         median(info, Measured::wallSeconds),
         mib(median(info, Measured::peakKb)));
   }
