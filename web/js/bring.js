@@ -268,6 +268,13 @@ function selectLine(n) {
   els.paste.setSelectionRange(start, end);
 }
 
+/** "9 s", "3 min 5 s", "1 h 2 min", as the terminal writes them. */
+function duration(seconds) {
+  if (seconds < 60) return `${seconds} s`;
+  if (seconds < 3600) return `${Math.floor(seconds / 60)} min ${seconds % 60} s`;
+  return `${Math.floor(seconds / 3600)} h ${Math.floor((seconds % 3600) / 60)} min`;
+}
+
 function detectedLabel(value, detected) {
   return detected ? `${value} (detected)` : `${value} (as chosen)`;
 }
@@ -380,7 +387,10 @@ function showProgress(job) {
   if (job.total > 0) {
     els.progress.max = job.total;
     els.progress.value = job.done;
-    els.status.textContent = `${job.phase}: ${count(job.done)} of ${count(job.total)}`;
+    const pace = job.pace
+      ? ` · ${count(Math.round(job.pace.per_second))}/s, about ${duration(job.pace.seconds_left)} left`
+      : '';
+    els.status.textContent = `${job.phase}: ${count(job.done)} of ${count(job.total)}${pace}`;
   } else {
     els.progress.removeAttribute('value');
     els.status.textContent = `${job.phase}…`;

@@ -2,14 +2,19 @@ package riffle.cli;
 
 import java.io.PrintStream;
 import java.util.Locale;
+import riffle.model.PhaseClock;
 import riffle.model.Progress;
 
-/** A one-line progress bar on stderr, shown only when the user is at a terminal. */
+/**
+ * A one-line progress bar on stderr, shown only when the user is at a terminal, with the phase's
+ * pace and time left once it can tell them ({@link PhaseClock}).
+ */
 final class TerminalProgress implements Progress {
   private static final int WIDTH = 30;
   private static final long INTERVAL_NANOS = 100_000_000L;
 
   private final PrintStream err;
+  private final PhaseClock clock = new PhaseClock();
   private long lastDraw;
   private boolean drawn;
 
@@ -25,6 +30,7 @@ final class TerminalProgress implements Progress {
   @Override
   public void update(String phase, long done, long total) {
     long now = System.nanoTime();
+    String pace = clock.update(phase, done, total, now).map(e -> " · " + e.words()).orElse("");
     boolean finished = total >= 0 && done >= total;
     if (!finished && drawn && now - lastDraw < INTERVAL_NANOS) {
       return;
@@ -39,13 +45,14 @@ final class TerminalProgress implements Progress {
       line =
           String.format(
               Locale.ROOT,
-              "%-8s [%s%s] %3d%% %,d/%,d",
+              "%-8s [%s%s] %3d%% %,d/%,d%s",
               phase,
               "#".repeat(filled),
               " ".repeat(WIDTH - filled),
               100 * Math.min(done, total) / total,
               done,
-              total);
+              total,
+              pace);
     }
     err.print("\r" + line + "\033[K");
     if (finished) {

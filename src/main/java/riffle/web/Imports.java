@@ -23,6 +23,7 @@ import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
 import riffle.model.ColumnRole;
 import riffle.model.InputException;
+import riffle.model.PhaseClock;
 import riffle.model.Progress;
 
 /**
@@ -71,6 +72,7 @@ final class Imports implements AutoCloseable {
    * @param phase what it is doing ("reading", "analysing", "storing" …)
    * @param done units of the phase finished
    * @param total units of the phase, -1 when unknown
+   * @param pace the phase's units per second and seconds left, once they can be told; null before
    * @param report what the import did, once done
    * @param error why it failed ({@code error}, {@code where}), once failed
    */
@@ -80,6 +82,7 @@ final class Imports implements AutoCloseable {
       String phase,
       long done,
       long total,
+      PhaseClock.Estimate pace,
       ImportReport report,
       Map<String, Object> error) {}
 
@@ -295,7 +298,7 @@ final class Imports implements AutoCloseable {
   /** Registers a new job, queued. */
   synchronized String newJob() {
     String id = "j" + ids.incrementAndGet();
-    jobs.put(id, new JobState(id, "queued", "waiting", 0, -1, null, null));
+    jobs.put(id, new JobState(id, "queued", "waiting", 0, -1, null, null, null));
     while (jobs.size() > MAX_JOBS) {
       jobs.remove(jobs.keySet().iterator().next());
     }
@@ -304,15 +307,19 @@ final class Imports implements AutoCloseable {
 
   /** A progress listener that records the job's phase. */
   Progress progress(String job) {
-    return (phase, done, total) -> update(job, "running", phase, done, total, null, null);
+    PhaseClock clock = new PhaseClock();
+    return (phase, done, total) -> {
+      Optional<PhaseClock.Estimate> pace = clock.update(phase, done, total, System.nanoTime());
+      update(job, "running", phase, done, total, pace.orElse(null), null, null);
+    };
   }
 
   void finished(String job, ImportReport report) {
-    update(job, "done", "done", 1, 1, report, null);
+    update(job, "done", "done", 1, 1, null, report, null);
   }
 
   void failed(String job, Map<String, Object> error) {
-    update(job, "failed", "failed", 0, -1, null, error);
+    update(job, "failed", "failed", 0, -1, null, null, error);
   }
 
   private synchronized void update(
@@ -321,10 +328,11 @@ final class Imports implements AutoCloseable {
       String phase,
       long done,
       long total,
+      PhaseClock.Estimate pace,
       ImportReport report,
       Map<String, Object> error) {
     if (jobs.containsKey(job)) {
-      jobs.put(job, new JobState(job, state, phase, done, total, report, error));
+      jobs.put(job, new JobState(job, state, phase, done, total, pace, report, error));
     }
   }
 
