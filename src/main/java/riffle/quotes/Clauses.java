@@ -298,6 +298,7 @@ final class Clauses {
         words,
         distinct(content, nc),
         distinct(stems, ns),
+        Arrays.copyOf(stems, ns),
         firstPerson,
         concreteness,
         polarity,

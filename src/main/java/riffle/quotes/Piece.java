@@ -9,6 +9,8 @@ package riffle.quotes;
  * @param words its words (tokens with a letter or digit)
  * @param content the ids of its content words, distinct and ascending (typicality)
  * @param stems the ids of all its word stems, distinct and ascending (near-duplicates)
+ * @param wording the ids of its word stems in text order: two pieces with the same wording say the
+ *     same thing the same way, whatever their case and punctuation ("said this way by N buyers")
  * @param firstPerson whether it speaks in the first person
  * @param concreteness share of the three marks of concrete wording it shows: a number, a named
  *     thing, a specific verb
@@ -24,6 +26,7 @@ record Piece(
     int words,
     int[] content,
     int[] stems,
+    int[] wording,
     boolean firstPerson,
     double concreteness,
     double polarity,

@@ -55,6 +55,21 @@ final class Ranking {
     Candidate rep() {
       return shown.get(0);
     }
+
+    /**
+     * The shown candidates worded as the best one (the same stems in the same order): the answers
+     * that said it this way, not those that said a longer or shorter thing near it.
+     */
+    List<Candidate> sameWording() {
+      int[] wording = rep().piece().wording();
+      return shown.stream().filter(c -> Arrays.equals(c.piece().wording(), wording)).toList();
+    }
+
+    /** How many answers said it this way. */
+    int saidThisWay() {
+      return (int)
+          sameWording().stream().mapToLong(c -> c.answer().source.answerId()).distinct().count();
+    }
   }
 
   /** A code's groups, as its ranking and the candidates by use need them. */
@@ -377,7 +392,7 @@ final class Ranking {
   // ----- scores of a group (its representative, times the popularity of its wording) -----
 
   private double general(Group g) {
-    return g.rep().score() * Score.popularity(g.shown().size());
+    return g.rep().score() * Score.popularity(g.saidThisWay());
   }
 
   private double typical(Group g) {
@@ -385,7 +400,7 @@ final class Ranking {
     return c.typicality()
         * lengthOf(c.piece())
         * directionOf(c)
-        * Score.popularity(g.shown().size());
+        * Score.popularity(g.saidThisWay());
   }
 
   private double subheadline(Group g) {
@@ -397,7 +412,7 @@ final class Ranking {
         * lengthOf(p)
         * directionOf(c)
         * bonus
-        * Score.popularity(g.shown().size());
+        * Score.popularity(g.saidThisWay());
   }
 
   private double proof(Group g) {
@@ -407,11 +422,11 @@ final class Ranking {
         * lengthOf(p)
         * directionOf(c)
         * (1 + p.concreteness())
-        * Score.popularity(g.shown().size());
+        * Score.popularity(g.saidThisWay());
   }
 
   private double headline(Group g) {
-    return g.rep().score() * Score.popularity(g.shown().size());
+    return g.rep().score() * Score.popularity(g.saidThisWay());
   }
 
   private static boolean compatible(Group g) {
@@ -427,9 +442,11 @@ final class Ranking {
   }
 
   private Quote quote(Code code, Group g, double score, Optional<QuoteSlot> slot) {
-    Candidate c = g.rep();
+    List<Candidate> same = g.sameWording();
+    Candidate c = mostCommonForm(same);
     QuoteSource s = c.answer().source;
-    List<Long> ids = g.shown().stream().map(x -> x.answer().source.answerId()).sorted().toList();
+    List<Long> ids =
+        same.stream().map(x -> x.answer().source.answerId()).distinct().sorted().toList();
     boolean fresh = false;
     if (settings.latestWave().isPresent()) {
       String latest = settings.latestWave().get();
@@ -444,7 +461,7 @@ final class Ranking {
         s.wave(),
         s.question(),
         s.segments(),
-        s.analysis().masked().substring(p.start(), p.end()),
+        text(c),
         p.start(),
         p.end(),
         Score.rounded(score),
@@ -452,6 +469,28 @@ final class Ranking {
         ids,
         fresh,
         slot);
+  }
+
+  private static String text(Candidate c) {
+    return c.answer().source.analysis().masked().substring(c.piece().start(), c.piece().end());
+  }
+
+  /**
+   * Of candidates with one wording (best first), the one written in the form most of them share,
+   * exactly ("Fast delivery" over "fast delivery!"); the best of that form.
+   */
+  private static Candidate mostCommonForm(List<Candidate> same) {
+    Map<String, Integer> forms = new HashMap<>();
+    for (Candidate x : same) {
+      forms.merge(text(x), 1, Integer::sum);
+    }
+    Candidate best = same.get(0);
+    for (Candidate x : same) {
+      if (forms.get(text(x)) > forms.get(text(best))) {
+        best = x;
+      }
+    }
+    return best;
   }
 
   // ----- one code -----

@@ -79,10 +79,12 @@
  * Pieces are taken best first (score, then answer id); a piece joins the first earlier
  * representative whose set of word stems (all words, negation marked) has a Jaccard similarity of
  * at least {@code similarity} (0.6 by default) with its own, or becomes a representative (Broder's
- * resemblance, 1997; found with the prefix filter of Bayardo, Ma &amp; Srikant 2007). A quote is
- * its group's best piece inside the wave and segment filters, its count the group's answers inside
- * the filters ("said this way by 14 buyers"), and its score is multiplied by the popularity factor
- * 1 + 0.1·ln(count). Grouping runs over all waves and segments; a wording is <b>new</b> when the
+ * resemblance, 1997; found with the prefix filter of Bayardo, Ma &amp; Srikant 2007), so near
+ * variants show once. A quote's wording is its group's best piece inside the wave and segment
+ * filters; its count is the answers inside the filters whose piece has that wording — the same
+ * stems in the same order, case and punctuation aside — never those of a longer or shorter piece
+ * near it ("said this way by 14 buyers"); its text is the exact form most of those answers wrote;
+ * and its score is multiplied by the popularity factor 1 + 0.1·ln(count). Grouping runs over all waves and segments; a wording is <b>new</b> when the
  * settings name the latest wave and every answer of its group is from that wave.
  *
  * <h2>Candidates by use</h2>
