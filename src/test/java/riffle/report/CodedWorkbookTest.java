@@ -9,15 +9,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.StringReader;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVRecord;
 import org.apache.poi.ss.usermodel.Cell;
 import org.apache.poi.ss.usermodel.CellType;
 import org.apache.poi.ss.usermodel.Row;
@@ -26,7 +23,6 @@ import org.apache.poi.ss.util.PaneInformation;
 import org.apache.poi.xssf.usermodel.XSSFSheet;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.Test;
-import riffle.csv.SafeCsv;
 import riffle.model.CodeFrequency;
 import riffle.model.Findings;
 import riffle.model.InputException;
@@ -105,51 +101,19 @@ class CodedWorkbookTest {
     return new XSSFWorkbook(new ByteArrayInputStream(out.toByteArray()));
   }
 
-  /** A sheet's cells as text: whole numbers as digits, blanks as "", padded to the header. */
-  static List<List<String>> cells(Sheet sheet) {
-    int width = sheet.getRow(0).getLastCellNum();
-    List<List<String>> rows = new ArrayList<>();
-    for (int r = 0; r <= sheet.getLastRowNum(); r++) {
-      Row row = sheet.getRow(r);
-      List<String> cells = new ArrayList<>();
-      for (int c = 0; c < width; c++) {
-        Cell cell = row == null ? null : row.getCell(c);
-        if (cell == null || cell.getCellType() == CellType.BLANK) {
-          cells.add("");
-        } else if (cell.getCellType() == CellType.NUMERIC) {
-          double v = cell.getNumericCellValue();
-          assertEquals(Math.rint(v), v, "a whole number at " + cell.getAddress());
-          cells.add(Long.toString((long) v));
-        } else {
-          assertEquals(CellType.STRING, cell.getCellType(), "at " + cell.getAddress());
-          cells.add(cell.getStringCellValue());
-        }
-      }
-      rows.add(cells);
-    }
-    return rows;
-  }
-
-  /** The CSV's records with the quotes SafeCsv put before formula-like cells taken off again. */
-  static List<List<String>> csvCells(String csv) throws IOException {
-    List<List<String>> rows = new ArrayList<>();
-    for (CSVRecord r : CSVFormat.RFC4180.parse(new StringReader(csv))) {
-      rows.add(r.stream().map(SafeCsv::restore).toList());
-    }
-    return rows;
-  }
-
   @Test
   void theCodedSheetsHoldTheCsvRowsWithFlagsAsNumbersAndFormulaTextAsText() throws Exception {
     CodedExport export = export(FORMULA);
     try (XSSFWorkbook book = workbook(export)) {
       XSSFSheet wide = book.getSheet(CodedWorkbook.CODED);
-      assertEquals(csvCells(Exports.codedAnswersCsv(export, false)), cells(wide));
       assertEquals(
-          csvCells(Exports.codedAnswersLongCsv(export, false)),
-          cells(book.getSheet(CodedWorkbook.LONG)));
+          WorkbookCells.csvCells(Exports.codedAnswersCsv(export, false)),
+          WorkbookCells.cells(wide));
+      assertEquals(
+          WorkbookCells.csvCells(Exports.codedAnswersLongCsv(export, false)),
+          WorkbookCells.cells(book.getSheet(CodedWorkbook.LONG)));
 
-      List<String> header = cells(wide).get(0);
+      List<String> header = WorkbookCells.cells(wide).get(0);
       Row first = wide.getRow(1);
       Cell text = first.getCell(header.indexOf("text"));
       // No formula and no leading apostrophe: the cell is a string holding exactly the text.
@@ -191,7 +155,7 @@ class CodedWorkbookTest {
   @Test
   void theCodebookSheetListsEveryCode() throws Exception {
     try (XSSFWorkbook book = workbook(export("fine"))) {
-      List<List<String>> rows = cells(book.getSheet(CodedWorkbook.CODEBOOK));
+      List<List<String>> rows = WorkbookCells.cells(book.getSheet(CodedWorkbook.CODEBOOK));
       assertEquals(BOOK_COLUMNS, rows.get(0));
       assertEquals(bookRows(), rows.subList(1, rows.size()));
       assertEquals(Survey.CODEBOOK.size() + 1, rows.size());
