@@ -94,7 +94,11 @@ final class CodedWorkbook {
         // Closing deletes a sheet's temporary file only once its rows are all flushed, as writing
         // the workbook would have done.
         for (Sheet sheet : book) {
-          ((SXSSFSheet) sheet).flushRows();
+          try {
+            ((SXSSFSheet) sheet).flushRows();
+          } catch (IOException flushing) {
+            e.addSuppressed(flushing);
+          }
         }
         throw e;
       }
