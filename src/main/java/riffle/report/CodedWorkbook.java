@@ -76,7 +76,9 @@ final class CodedWorkbook {
   private CodedWorkbook() {}
 
   static void write(CodedWorkbookInput in, OutputStream out) throws IOException, InputException {
-    // Closing the workbook deletes its temporary files.
+    // Closing the workbook deletes its temporary files. They are gzipped: about a fifth more CPU
+    // time (100,000 answers: 14.5 s instead of 11.7 s), but a fraction of the space, which matters
+    // where the temporary folder is in memory (tmpfs).
     try (SXSSFWorkbook book = new SXSSFWorkbook(WINDOW)) {
       book.setCompressTempFiles(true);
       try {
