@@ -37,6 +37,11 @@ final class OutputFiles {
   /** Writes what {@code contents} writes. */
   static void write(Path file, Contents contents) throws InputException {
     Path target = file.toAbsolutePath();
+    if (Files.isDirectory(target)) {
+      // Moving into place would replace an empty folder.
+      throw new InputException(
+          new InputProblem(file.toString(), 0, 0, "is a folder; give the name of a file to write"));
+    }
     Path part =
         target.resolveSibling(
             "."

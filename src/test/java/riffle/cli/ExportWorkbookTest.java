@@ -181,6 +181,11 @@ class ExportWorkbookTest {
     assertEquals(2, both.code());
     assertTrue(both.err().contains("leave out --long"), both.err());
     assertFalse(Files.exists(out), "nothing written");
+    Path folder = Files.createDirectories(dir.resolve("exports"));
+    CliTest.Run intoFolder = export("coded", "xlsx", folder);
+    assertEquals(2, intoFolder.code());
+    assertTrue(intoFolder.err().contains("is a folder"), intoFolder.err());
+    assertTrue(Files.isDirectory(folder), "the folder stays a folder");
   }
 
   @Test
