@@ -72,6 +72,8 @@ function renderDownloads() {
     ' \u00b7 ',
     link(`/api/export/coded.csv${query({ question: els.question.value, shape: 'long' })}`, 'one row per code (CSV)'),
     ' \u00b7 ',
+    link(`/api/export/coded.xlsx${query({ question: els.question.value })}`, 'coded answers, codebook and findings (Excel)'),
+    ' \u00b7 ',
     link('/api/export/codebook.csv', 'codebook (CSV)'),
   );
 }

@@ -1,5 +1,7 @@
 package riffle.app;
 
+import java.io.IOException;
+import java.io.OutputStream;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
@@ -11,6 +13,7 @@ import java.util.Optional;
 import java.util.OptionalLong;
 import java.util.Set;
 import java.util.TreeSet;
+import riffle.coding.CodebookFile;
 import riffle.model.AnswerRead;
 import riffle.model.Assignment;
 import riffle.model.Code;
@@ -21,6 +24,7 @@ import riffle.model.Origin;
 import riffle.model.QuestionFindings;
 import riffle.model.SegmentFindings;
 import riffle.report.CodedExport;
+import riffle.report.CodedWorkbookInput;
 import riffle.report.ExportAnswer;
 import riffle.report.ExportAssignment;
 import riffle.report.Exports;
@@ -209,7 +213,32 @@ public final class Reporting {
    */
   public String codedCsv(Optional<String> question, boolean longFormat, boolean withBom)
       throws InputException {
+    CodedExport export = codedExport(load(question));
+    return longFormat
+        ? Exports.codedAnswersLongCsv(export, withBom)
+        : Exports.codedAnswersCsv(export, withBom);
+  }
+
+  /**
+   * The coded answers as an Excel workbook written to {@code out}: the rows of both CSV forms, the
+   * codebook and the findings of the same answers, one sheet each. Masked text only.
+   *
+   * @throws InputException when the question is not the project's, or a cell or a sheet would
+   *     exceed what a workbook holds
+   */
+  public void codedWorkbook(Optional<String> question, OutputStream out)
+      throws InputException, IOException {
     Loaded l = load(question);
+    Findings findings =
+        findings(
+            l, new FindingsQuery(question, Optional.empty(), Optional.empty(), Optional.empty()));
+    Exports.codedAnswersWorkbook(
+        new CodedWorkbookInput(
+            codedExport(l), CodebookFile.COLUMNS, CodebookFile.rows(l.codes), findings),
+        out);
+  }
+
+  private static CodedExport codedExport(Loaded l) {
     List<ExportAnswer> answers = new ArrayList<>(l.rows.size());
     for (ProjectStore.AnswerRow r : l.rows) {
       List<ExportAssignment> as = new ArrayList<>();
@@ -234,10 +263,7 @@ public final class Reporting {
               as,
               l.reads.containsKey(r.id()) ? l.reads.get(r.id()).readers() : List.of()));
     }
-    CodedExport export = new CodedExport(codebook(l.codes), answers);
-    return longFormat
-        ? Exports.codedAnswersLongCsv(export, withBom)
-        : Exports.codedAnswersCsv(export, withBom);
+    return new CodedExport(codebook(l.codes), answers);
   }
 
   /** The codebook as Markdown, themes above their codes. */

@@ -266,12 +266,19 @@ public final class CodebookFile {
 
   /** The codebook as CSV (RFC 4180), cells a spreadsheet would run as formulas neutralised. */
   public static String csv(List<Code> book) {
-    Map<Long, String> names = names(book);
     SafeCsv out = SafeCsv.create(false).row(COLUMNS);
-    for (Code c : book) {
-      out.row(values(c, names));
-    }
+    rows(book).forEach(out::row);
     return out.toString();
+  }
+
+  /** One row per code with the cells of {@link #COLUMNS}, as the CSV has them (not neutralised). */
+  public static List<List<String>> rows(List<Code> book) {
+    Map<Long, String> names = names(book);
+    List<List<String>> out = new ArrayList<>(book.size());
+    for (Code c : book) {
+      out.add(values(c, names));
+    }
+    return out;
   }
 
   /** The codebook as JSON: {@code {"codes": [...]}}. */

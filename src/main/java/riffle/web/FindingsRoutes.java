@@ -2,14 +2,21 @@ package riffle.web;
 
 import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
+import java.io.ByteArrayOutputStream;
 import java.nio.charset.StandardCharsets;
 import java.util.Map;
 import java.util.Optional;
 import riffle.app.FindingsQuery;
 import riffle.app.Project;
 
-/** The API of the findings, the reports and the exports (coded answers, the codebook). */
+/**
+ * The API of the findings, the reports and the exports (coded answers as CSV or a workbook, the
+ * codebook).
+ */
 final class FindingsRoutes {
+  /** The media type of an Office Open XML workbook (ECMA-376). */
+  static final String XLSX = "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet";
+
   private final ProjectAccess access;
 
   FindingsRoutes(ProjectAccess access) {
@@ -22,6 +29,7 @@ final class FindingsRoutes {
     cfg.routes.get("/api/report.html", this::reportHtml);
     cfg.routes.get("/api/report.md", this::reportMarkdown);
     cfg.routes.get("/api/export/coded.csv", this::codedCsv);
+    cfg.routes.get("/api/export/coded.xlsx", this::codedWorkbook);
     cfg.routes.get("/api/export/codebook.csv", this::codebookCsv);
   }
 
@@ -63,6 +71,24 @@ final class FindingsRoutes {
         "text/csv; charset=utf-8",
         longFormat ? "coded-answers-long.csv" : "coded-answers.csv",
         csv);
+  }
+
+  /**
+   * The coded answers as an Excel workbook (with the codebook and the findings), made whole before
+   * a byte is sent: a failure is an error answer, never half a file.
+   */
+  void codedWorkbook(Context ctx) throws Exception {
+    Optional<String> question = Requests.text(ctx, "question");
+    byte[] book =
+        access.call(
+            p -> {
+              ByteArrayOutputStream out = new ByteArrayOutputStream(1 << 16);
+              p.reporting().codedWorkbook(question, out);
+              return out.toByteArray();
+            });
+    ctx.header("Content-Disposition", "attachment; filename=\"coded-answers.xlsx\"");
+    ctx.contentType(XLSX);
+    ctx.result(book);
   }
 
   void codebookCsv(Context ctx) throws Exception {

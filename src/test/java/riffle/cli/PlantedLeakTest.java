@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -12,6 +13,11 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
+import org.apache.poi.ss.usermodel.Cell;
+import org.apache.poi.ss.usermodel.DataFormatter;
+import org.apache.poi.ss.usermodel.Row;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -132,8 +138,33 @@ class PlantedLeakTest {
         "--out",
         longCsv.toString());
     outputs.put("coded-long.csv", Files.readString(longCsv, StandardCharsets.UTF_8));
+    Path xlsx = dir.resolve("coded.xlsx");
+    CliTest.ok(
+        "export",
+        "--project",
+        project,
+        "--what",
+        "coded",
+        "--format",
+        "xlsx",
+        "--out",
+        xlsx.toString());
+    StringBuilder cells = new StringBuilder();
+    DataFormatter shown = new DataFormatter();
+    try (InputStream in = Files.newInputStream(xlsx);
+        XSSFWorkbook book = new XSSFWorkbook(in)) {
+      for (Sheet sheet : book) {
+        for (Row row : sheet) {
+          for (Cell cell : row) {
+            cells.append(shown.formatCellValue(cell)).append('\n');
+          }
+        }
+      }
+    }
+    outputs.put("coded.xlsx", cells.toString());
     assertTrue(outputs.get("board.md").contains("Headline"), outputs.get("board.md"));
     assertTrue(outputs.get("coded.csv").lines().count() > answers, "one row per answer");
+    assertTrue(outputs.get("coded.xlsx").lines().count() > answers, "the workbook's cells");
 
     List<String> leaks = new ArrayList<>();
     for (String value : planted) {

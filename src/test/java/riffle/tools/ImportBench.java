@@ -177,7 +177,7 @@ public final class ImportBench {
         mib(median(info, Measured::peakKb)));
   }
 
-  private static String mib(double kb) {
+  static String mib(double kb) {
     return String.format(Locale.ROOT, "%,.0f MiB", kb / 1024);
   }
 
@@ -191,8 +191,7 @@ public final class ImportBench {
    * Runs a command under {@code /usr/bin/time -v}, its standard output in {@code log}; fails with
    * the command's error output when it exits with another code than 0.
    */
-  private static Measured measure(Path log, String... command)
-      throws IOException, InterruptedException {
+  static Measured measure(Path log, String... command) throws IOException, InterruptedException {
     Path times = log.resolveSibling(log.getFileName() + ".time");
     Path err = log.resolveSibling(log.getFileName() + ".err");
     List<String> timed = new ArrayList<>(List.of(str(TIME), "-v", "-o", str(times)));
@@ -206,7 +205,7 @@ public final class ImportBench {
     return Measured.parse(Files.readString(times, StandardCharsets.UTF_8));
   }
 
-  private static String nproc() throws IOException, InterruptedException {
+  static String nproc() throws IOException, InterruptedException {
     Process p = new ProcessBuilder("nproc").redirectErrorStream(true).start();
     String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8).strip();
     return p.waitFor() == 0 ? out : "unknown";

@@ -6,7 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import java.io.ByteArrayInputStream;
+import java.io.StringReader;
 import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -15,6 +18,10 @@ import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.apache.poi.ss.usermodel.Sheet;
+import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -436,6 +443,35 @@ class CodingApiTest {
     assertTrue(get("/api/report.md").raw().body().contains("Returns unclear"));
     assertEquals(400, get("/api/findings?from=Wave%201").status());
     assertEquals(400, get("/api/findings?question=9").status());
+  }
+
+  @Test
+  void theCodedAnswersDownloadAsAWorkbookWithTheCsvRows() throws Exception {
+    HttpResponse<byte[]> r =
+        WebServerTest.HTTP.send(
+            HttpRequest.newBuilder(server.url().resolve("/api/export/coded.xlsx")).GET().build(),
+            HttpResponse.BodyHandlers.ofByteArray());
+    assertEquals(200, r.statusCode());
+    assertEquals(FindingsRoutes.XLSX, r.headers().firstValue("Content-Type").orElse(""));
+    assertTrue(
+        r.headers().firstValue("Content-Disposition").orElse("").contains("coded-answers.xlsx"));
+    List<CSVRecord> csv =
+        CSVFormat.RFC4180
+            .parse(new StringReader(get("/api/export/coded.csv").raw().body()))
+            .getRecords();
+    try (XSSFWorkbook book = new XSSFWorkbook(new ByteArrayInputStream(r.body()))) {
+      Sheet coded = book.getSheet("Coded answers");
+      assertEquals(csv.size() - 1, coded.getLastRowNum(), "one row per answer, as the CSV");
+      List<String> header = new ArrayList<>();
+      coded.getRow(0).forEach(c -> header.add(c.getStringCellValue()));
+      assertEquals(csv.get(0).toList(), header);
+      for (String sheet : List.of("Codes given", "Codebook", "Findings", "Changes")) {
+        assertNotNull(book.getSheet(sheet), sheet);
+      }
+    }
+    WebServerTest.Answer bad = get("/api/export/coded.xlsx?question=9");
+    assertEquals(400, bad.status());
+    assertNotNull(bad.json(), "an error answer, not half a file");
   }
 
   @Test
