@@ -51,7 +51,7 @@ export function mount(section, context) {
   els.file = h('input', {
     type: 'file',
     id: 'bring-file',
-    accept: '.csv,.tsv,.txt,text/csv,text/tab-separated-values',
+    accept: '.csv,.tsv,.txt,.xlsx,.xlsm,text/csv,text/tab-separated-values,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
     on: { change: chooseFile },
   });
   els.fileError = h('div', { class: 'error', id: 'bring-file-error', role: 'alert', hidden: true });
@@ -117,7 +117,7 @@ export function mount(section, context) {
         h(
           'div',
           { class: 'field' },
-          h('label', { for: 'bring-file' }, 'A file (CSV or TSV)'),
+          h('label', { for: 'bring-file' }, 'A file (CSV, TSV or Excel .xlsx)'),
           els.file,
           els.fileError,
           h(
@@ -307,8 +307,8 @@ function showPreview() {
     h(
       'p',
       { class: 'readas', id: 'bring-readas' },
-      p.encoding === 'pasted text' ? 'Pasted text' : `Read as ${detectedLabel(p.encoding, p.encoding_detected)}`,
-      `, columns separated by ${detectedLabel(p.delimiter, p.delimiter_detected)} · `,
+      p.encoding === 'pasted text' ? 'Pasted text' : p.encoding.startsWith('Excel workbook') ? `Read from the ${p.encoding}` : `Read as ${detectedLabel(p.encoding, p.encoding_detected)}`,
+      p.encoding.startsWith('Excel workbook') ? ' · ' : `, columns separated by ${detectedLabel(p.delimiter, p.delimiter_detected)} · `,
       h('strong', {}, plural(p.total_rows, 'row')),
       ' to bring in',
       p.skipped_rows ? ` · ${plural(p.skipped_rows, 'row')} left out` : '',

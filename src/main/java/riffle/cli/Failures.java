@@ -33,6 +33,7 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
           Map.entry("max columns", "--max-columns"),
           Map.entry("delimiter", "--delimiter"),
           Map.entry("encoding", "--encoding"),
+          Map.entry("sheet", "--sheet"),
           Map.entry("text column", "--text-column"),
           Map.entry("id column", "--id-column"),
           Map.entry("date column", "--date-column"),

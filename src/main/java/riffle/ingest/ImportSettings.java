@@ -47,6 +47,7 @@ public final class ImportSettings {
   private final long maxBytes;
   private final int maxProblems;
   private final int maxColumns;
+  private final Optional<String> sheet;
 
   private ImportSettings(Builder b) {
     this.delimiter = Optional.ofNullable(b.delimiter);
@@ -61,6 +62,7 @@ public final class ImportSettings {
     this.maxBytes = b.maxBytes;
     this.maxProblems = b.maxProblems;
     this.maxColumns = b.maxColumns;
+    this.sheet = Optional.ofNullable(b.sheet);
   }
 
   /** Returns a builder with every option on auto and the default limits. */
@@ -135,6 +137,14 @@ public final class ImportSettings {
     return maxColumns;
   }
 
+  /**
+   * Returns the sheet of a workbook to read, by name or 1-based number; empty means the first
+   * visible sheet with data. Text inputs have no sheets.
+   */
+  public Optional<String> sheet() {
+    return sheet;
+  }
+
   /** Returns each named column with the option that named it, in a fixed option order. */
   Map<String, List<String>> namedColumns() {
     Map<String, List<String>> named = new LinkedHashMap<>();
@@ -162,6 +172,7 @@ public final class ImportSettings {
         + maxProblems
         + ", maxColumns="
         + maxColumns
+        + sheet.map(n -> ", sheet=" + n).orElse("")
         + "]";
   }
 
@@ -190,6 +201,7 @@ public final class ImportSettings {
     private long maxBytes = DEFAULT_MAX_BYTES;
     private int maxProblems = DEFAULT_MAX_PROBLEMS;
     private int maxColumns = DEFAULT_MAX_COLUMNS;
+    private String sheet;
 
     private Builder() {}
 
@@ -284,6 +296,17 @@ public final class ImportSettings {
     /** Sets the most columns a header may have; must be positive. */
     public Builder maxColumns(int maxColumns) {
       this.maxColumns = maxColumns;
+      return this;
+    }
+
+    /**
+     * Sets the sheet of a workbook to read.
+     *
+     * @param sheet a sheet's name or 1-based number, or null (or blank) for the first visible sheet
+     *     with data
+     */
+    public Builder sheet(String sheet) {
+      this.sheet = sheet == null || sheet.isBlank() ? null : sheet.strip();
       return this;
     }
 

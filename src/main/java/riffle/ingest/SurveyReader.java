@@ -5,14 +5,16 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import riffle.model.InputProblem;
 
 /**
- * Reads a survey export (a CSV/TSV file, or cells pasted from a spreadsheet) into a {@link
- * SurveyTable}. The front door of the ingest stage; stateless and thread-safe.
+ * Reads a survey export (a CSV/TSV file, one sheet of an Excel .xlsx workbook, or cells pasted from
+ * a spreadsheet) into a {@link SurveyTable}. The front door of the ingest stage; stateless and
+ * thread-safe.
  *
  * <p>Problems in single rows are collected in the table; an input that cannot be used at all throws
  * {@link UnreadableInputException} with a positioned message an analyst can act on.
@@ -58,7 +60,9 @@ public final class SurveyReader {
   }
 
   /**
-   * Reads an export from memory.
+   * Reads an export from memory. A zip archive holding {@code xl/workbook.xml} is read as an Excel
+   * workbook (see {@link WorkbookReader}), whatever its name; an old .xls, an .xlsb, an .ods or an
+   * encrypted workbook is refused with what to do.
    *
    * @param source the name used in the table and in messages, usually the file name
    * @param bytes the whole export
@@ -72,12 +76,47 @@ public final class SurveyReader {
     Objects.requireNonNull(settings, "settings");
     checkSize(source, bytes.length, settings, "file");
     try {
+      WorkbookReader.refuseOtherSpreadsheets(bytes);
+      if (WorkbookReader.isWorkbook(bytes)) {
+        return readWorkbook(source, bytes, settings);
+      }
       EncodingSniffer.Decoded d = EncodingSniffer.decode(bytes, settings.encoding());
+      List<EncodingSniffer.Warning> warnings = new ArrayList<>(d.warnings());
+      settings
+          .sheet()
+          .ifPresent(
+              s ->
+                  warnings.add(
+                      new EncodingSniffer.Warning(
+                          0,
+                          "the sheet setting ('"
+                              + s
+                              + "') applies to Excel workbooks only; this file was read as text")));
       return TableParser.parse(
-          new TableParser.Input(source, d.text(), d.label(), d.detected(), d.warnings(), false),
+          new TableParser.Input(source, d.text(), d.label(), d.detected(), warnings, false),
           settings);
     } catch (BadInput e) {
       throw new UnreadableInputException(e.at(source));
+    }
+  }
+
+  /**
+   * Reads one sheet of a workbook; problems in it name the file and the sheet ({@code
+   * wave.xlsx:Answers:17:3}), the line being the sheet's row number and the column its number.
+   */
+  private static SurveyTable readWorkbook(String source, byte[] bytes, ImportSettings settings)
+      throws BadInput, UnreadableInputException {
+    WorkbookReader.Sheet sheet = WorkbookReader.read(bytes, settings);
+    String at = source + ":" + sheet.name();
+    try {
+      return TableParser.parseSheet(
+          at,
+          WorkbookReader.LABEL + " (sheet '" + sheet.name() + "')",
+          sheet.records(),
+          sheet.notes(),
+          settings);
+    } catch (BadInput e) {
+      throw new UnreadableInputException(e.at(at));
     }
   }
 
