@@ -69,7 +69,8 @@ final class WorkbookReader {
 
   /**
    * True for a zip archive holding an {@code xl/workbook.xml} part, an .xlsx or .xlsm, or the parts
-   * written around it (a workbook cut short may have lost the part's name at its end).
+   * written around it; and for an Office Open XML package that is no document or presentation,
+   * which is a workbook cut short before its {@code xl/} parts (and is then refused as damaged).
    */
   static boolean isWorkbook(byte[] b) {
     if (!startsWith(b, 'P', 'K', 3, 4)) {
@@ -80,7 +81,9 @@ final class WorkbookReader {
         return true;
       }
     }
-    return false;
+    return contains(b, "[Content_Types].xml", false)
+        && !contains(b, "word/", false)
+        && !contains(b, "ppt/", false);
   }
 
   /**

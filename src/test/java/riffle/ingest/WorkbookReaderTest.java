@@ -359,12 +359,16 @@ class WorkbookReaderTest {
   @Test
   void aTruncatedWorkbookIsRefusedWithWhatToDo() {
     byte[] whole = Workbooks.of("Answers", answers());
-    String m = refusal(Arrays.copyOf(whole, whole.length / 2), ImportSettings.defaults());
-    assertTrue(
-        m.startsWith("shop.xlsx: the workbook cannot be opened: it is damaged or cut short"), m);
-    assertTrue(
-        m.endsWith("open it in the spreadsheet program, save it as .xlsx or CSV and import that"),
-        m);
+    for (int tenths = 1; tenths <= 8; tenths++) {
+      String m =
+          refusal(Arrays.copyOf(whole, whole.length * tenths / 10), ImportSettings.defaults());
+      assertTrue(
+          m.startsWith("shop.xlsx: the workbook cannot be opened: it is damaged or cut short"),
+          tenths + "/10: " + m);
+      assertTrue(
+          m.endsWith("open it in the spreadsheet program, save it as .xlsx or CSV and import that"),
+          m);
+    }
   }
 
   @Test
