@@ -56,7 +56,7 @@ public final class SurveyReader {
     } catch (IOException e) {
       throw unreadable(source, "file cannot be read (" + e.getMessage() + ")");
     }
-    return readBytes(source, bytes, settings);
+    return read(source, bytes, file, settings);
   }
 
   /**
@@ -75,10 +75,21 @@ public final class SurveyReader {
     Objects.requireNonNull(bytes, "bytes");
     Objects.requireNonNull(settings, "settings");
     checkSize(source, bytes.length, settings, "file");
+    return read(source, bytes, null, settings);
+  }
+
+  /** Reads the bytes of an export, a workbook from {@code file} when it is on disk. */
+  private static SurveyTable read(String source, byte[] bytes, Path file, ImportSettings settings)
+      throws UnreadableInputException {
     try {
       WorkbookReader.refuseOtherSpreadsheets(bytes);
       if (WorkbookReader.isWorkbook(bytes)) {
-        return readWorkbook(source, bytes, settings);
+        return readWorkbook(
+            source,
+            file == null
+                ? WorkbookReader.read(bytes, settings)
+                : WorkbookReader.read(file, settings),
+            settings);
       }
       EncodingSniffer.Decoded d = EncodingSniffer.decode(bytes, settings.encoding());
       List<EncodingSniffer.Warning> warnings = new ArrayList<>(d.warnings());
@@ -104,9 +115,9 @@ public final class SurveyReader {
    * Reads one sheet of a workbook; problems in it name the file and the sheet ({@code
    * wave.xlsx:Answers:17:3}), the line being the sheet's row number and the column its number.
    */
-  private static SurveyTable readWorkbook(String source, byte[] bytes, ImportSettings settings)
-      throws BadInput, UnreadableInputException {
-    WorkbookReader.Sheet sheet = WorkbookReader.read(bytes, settings);
+  private static SurveyTable readWorkbook(
+      String source, WorkbookReader.Sheet sheet, ImportSettings settings)
+      throws UnreadableInputException {
     String at = source + ":" + sheet.name();
     try {
       return TableParser.parseSheet(

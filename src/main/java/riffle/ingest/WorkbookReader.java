@@ -4,25 +4,33 @@ import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.TreeSet;
 import javax.xml.parsers.ParserConfigurationException;
 import org.apache.poi.openxml4j.exceptions.OpenXML4JException;
 import org.apache.poi.openxml4j.opc.OPCPackage;
+import org.apache.poi.openxml4j.opc.PackageAccess;
+import org.apache.poi.openxml4j.opc.PackagePart;
 import org.apache.poi.ss.usermodel.DataFormatter;
 import org.apache.poi.ss.usermodel.DateUtil;
+import org.apache.poi.ss.usermodel.Font;
+import org.apache.poi.ss.usermodel.RichTextString;
 import org.apache.poi.ss.util.CellReference;
 import org.apache.poi.util.XMLHelper;
-import org.apache.poi.xssf.eventusermodel.ReadOnlySharedStringsTable;
 import org.apache.poi.xssf.eventusermodel.XSSFReader;
 import org.apache.poi.xssf.eventusermodel.XSSFSheetXMLHandler;
+import org.apache.poi.xssf.model.SharedStrings;
 import org.apache.poi.xssf.model.StylesTable;
 import org.apache.poi.xssf.usermodel.XSSFComment;
+import org.apache.poi.xssf.usermodel.XSSFRelation;
 import org.xml.sax.Attributes;
 import org.xml.sax.InputSource;
 import org.xml.sax.SAXException;
@@ -33,8 +41,8 @@ import org.xml.sax.helpers.DefaultHandler;
  * Reads one sheet of an Excel workbook (.xlsx, ECMA-376 SpreadsheetML) into the records the CSV
  * path yields: one {@link CsvRecords.Raw} per sheet row, its line the sheet's row number, its cells
  * the values as the sheet shows them. The sheet is streamed with POI's event API (SAX over the
- * sheet part, shared strings read-only), so a sheet of 100,000 rows never becomes a workbook object
- * model in memory.
+ * sheet part, shared strings read once as plain text), so a sheet of 100,000 rows never becomes a
+ * workbook object model in memory.
  *
  * <p>Cell values: text and rich text as plain text; numbers as the General format shows them (no
  * float noise, integers without {@code .0}); booleans {@code TRUE}/{@code FALSE}; errors such as
@@ -124,6 +132,30 @@ final class WorkbookReader {
    */
   static Sheet read(byte[] bytes, ImportSettings settings) throws BadInput {
     try (OPCPackage pkg = OPCPackage.open(new ByteArrayInputStream(bytes))) {
+      return read(pkg, settings);
+    } catch (BadInput e) {
+      throw e;
+    } catch (IOException | OpenXML4JException | RuntimeException e) {
+      throw unreadable(e);
+    }
+  }
+
+  /**
+   * Reads a workbook on disk as {@link #read(byte[], ImportSettings)} does, its parts unpacked from
+   * the file as they are read rather than all at once into memory.
+   */
+  static Sheet read(Path file, ImportSettings settings) throws BadInput {
+    try (OPCPackage pkg = OPCPackage.open(file.toFile(), PackageAccess.READ)) {
+      return read(pkg, settings);
+    } catch (BadInput e) {
+      throw e;
+    } catch (OpenXML4JException | IOException | RuntimeException e) {
+      throw unreadable(e);
+    }
+  }
+
+  private static Sheet read(OPCPackage pkg, ImportSettings settings) throws BadInput {
+    try {
       XSSFReader reader = new XSSFReader(pkg);
       Book book = new Book();
       try (InputStream in = reader.getWorkbookData()) {
@@ -132,7 +164,7 @@ final class WorkbookReader {
       if (book.sheets.isEmpty()) {
         throw new BadInput("the workbook has no sheets; " + SAVE_AS + " from a sheet with data");
       }
-      ReadOnlySharedStringsTable strings = new ReadOnlySharedStringsTable(pkg, false);
+      SharedStrings strings = new SharedText(pkg);
       StylesTable styles = reader.getStylesTable();
       DataFormatter cells = new Cells(book.date1904);
       int chosen = -1;
@@ -242,7 +274,7 @@ final class WorkbookReader {
       XSSFReader reader,
       SheetRef sheet,
       StylesTable styles,
-      ReadOnlySharedStringsTable strings,
+      SharedStrings strings,
       DataFormatter cells)
       throws IOException, OpenXML4JException, SAXException {
     Rows rows = new Rows();
@@ -369,7 +401,7 @@ final class WorkbookReader {
 
     @Override
     public void cell(String ref, String value, XSSFComment comment) {
-      int col = ref == null ? next : new CellReference(ref).getCol();
+      int col = ref == null ? next : column(ref);
       next = col + 1;
       if (value == null || value.isEmpty()) {
         return;
@@ -400,6 +432,20 @@ final class WorkbookReader {
       records.add(new CsvRecords.Raw(line, Arrays.copyOf(cells, n)));
       lastLine = line;
       width = Math.max(width, n);
+    }
+
+    /** The 0-based column of a cell reference such as {@code AB17}. */
+    private static int column(String ref) {
+      int col = 0;
+      for (int i = 0; i < ref.length(); i++) {
+        char c = ref.charAt(i);
+        if (c >= 'A' && c <= 'Z') {
+          col = col * 26 + (c - 'A' + 1);
+        } else if (c != '$') {
+          break;
+        }
+      }
+      return col - 1;
     }
 
     /** The records, each padded to the widest row. */
@@ -503,15 +549,178 @@ final class WorkbookReader {
       this.date1904 = date1904;
     }
 
+    /** Whether each format seen is a date format; a sheet uses a handful, each on many cells. */
+    private final Map<String, Boolean> dateFormats = new HashMap<>();
+
     @Override
     public String formatRawCellContents(double value, int formatIndex, String formatString) {
-      if (DateUtil.isADateFormat(formatIndex, formatString)) {
+      Boolean date =
+          dateFormats.computeIfAbsent(
+              formatIndex + ":" + formatString,
+              k -> DateUtil.isADateFormat(formatIndex, formatString));
+      if (date) {
         String iso = isoDate(value, date1904);
         if (iso != null) {
           return iso;
         }
       }
+      if (value == Math.rint(value) && Math.abs(value) < 1e11) {
+        return Long.toString((long) value); // what General shows for a whole number of 11 digits
+      }
       return super.formatRawCellContents(value, 0, "General");
+    }
+  }
+
+  /**
+   * The shared strings part read once, each item kept as its plain text: POI's read-only table
+   * answers each cell with a new rich text object, whose XML bean costs more than the rest of the
+   * cell. The text is the {@code t} elements of an item outside phonetic runs, with {@code _xHHHH_}
+   * escapes decoded, as {@code ReadOnlySharedStringsTable} and {@code XSSFRichTextString} give it.
+   */
+  private static final class SharedText extends DefaultHandler implements SharedStrings {
+    private final List<String> items = new ArrayList<>();
+    private final StringBuilder text = new StringBuilder();
+    private boolean inText;
+    private boolean inPhonetic;
+
+    SharedText(OPCPackage pkg) throws IOException, SAXException {
+      for (PackagePart part :
+          pkg.getPartsByContentType(XSSFRelation.SHARED_STRINGS.getContentType())) {
+        try (InputStream in = part.getInputStream()) {
+          parse(in, this);
+        }
+        break;
+      }
+    }
+
+    @Override
+    public void startElement(String uri, String local, String qName, Attributes a) {
+      switch (local) {
+        case "si" -> text.setLength(0);
+        case "t" -> inText = true;
+        case "rPh" -> inPhonetic = true;
+        default -> {}
+      }
+    }
+
+    @Override
+    public void endElement(String uri, String local, String qName) {
+      switch (local) {
+        case "si" -> items.add(decode(text));
+        case "t" -> inText = false;
+        case "rPh" -> inPhonetic = false;
+        default -> {}
+      }
+    }
+
+    @Override
+    public void characters(char[] ch, int start, int length) {
+      if (inText && !inPhonetic) {
+        text.append(ch, start, length);
+      }
+    }
+
+    @Override
+    public RichTextString getItemAt(int idx) {
+      return new Plain(items.get(idx));
+    }
+
+    @Override
+    public int getCount() {
+      return items.size();
+    }
+
+    @Override
+    public int getUniqueCount() {
+      return items.size();
+    }
+
+    /** Decodes the {@code _xHHHH_} escapes SpreadsheetML writes for characters XML cannot hold. */
+    static String decode(CharSequence s) {
+      StringBuilder out = null;
+      int last = 0;
+      for (int i = 0; i + 7 <= s.length(); i++) {
+        if (s.charAt(i) == '_' && s.charAt(i + 1) == 'x' && s.charAt(i + 6) == '_') {
+          int code = hex(s, i + 2);
+          if (code >= 0) {
+            if (out == null) {
+              out = new StringBuilder(s.length());
+            }
+            out.append(s, last, i).append((char) code);
+            last = i + 7;
+            i += 6;
+          }
+        }
+      }
+      if (out == null) {
+        return s.toString();
+      }
+      return out.append(s, last, s.length()).toString();
+    }
+
+    private static int hex(CharSequence s, int from) {
+      int v = 0;
+      for (int i = from; i < from + 4; i++) {
+        int d = Character.digit(s.charAt(i), 16);
+        if (d < 0) {
+          return -1;
+        }
+        v = v * 16 + d;
+      }
+      return v;
+    }
+  }
+
+  /** A shared string's plain text, the only thing the sheet handler asks of it. */
+  private record Plain(String text) implements RichTextString {
+    @Override
+    public String getString() {
+      return text;
+    }
+
+    @Override
+    public String toString() {
+      return text;
+    }
+
+    @Override
+    public int length() {
+      return text.length();
+    }
+
+    @Override
+    public int numFormattingRuns() {
+      return 0;
+    }
+
+    @Override
+    public int getIndexOfFormattingRun(int index) {
+      return 0;
+    }
+
+    @Override
+    public void applyFont(int startIndex, int endIndex, short fontIndex) {
+      throw new UnsupportedOperationException("read-only");
+    }
+
+    @Override
+    public void applyFont(int startIndex, int endIndex, Font font) {
+      throw new UnsupportedOperationException("read-only");
+    }
+
+    @Override
+    public void applyFont(Font font) {
+      throw new UnsupportedOperationException("read-only");
+    }
+
+    @Override
+    public void clearFormatting() {
+      throw new UnsupportedOperationException("read-only");
+    }
+
+    @Override
+    public void applyFont(short fontIndex) {
+      throw new UnsupportedOperationException("read-only");
     }
   }
 
@@ -532,7 +741,7 @@ final class WorkbookReader {
     long minutes = Math.round(serial * 1440);
     long days = minutes / 1440;
     int minute = (int) (minutes % 1440);
-    String time = String.format(Locale.ROOT, "%02d:%02d", minute / 60, minute % 60);
+    String time = twoDigits(minute / 60) + ":" + twoDigits(minute % 60);
     String date;
     if (date1904) {
       date = LocalDate.of(1904, 1, 1).plusDays(days).toString();
@@ -548,6 +757,10 @@ final class WorkbookReader {
     return minute == 0 ? date : date + "T" + time;
   }
 
+  private static String twoDigits(int n) {
+    return n < 10 ? "0" + n : Integer.toString(n);
+  }
+
   private static boolean startsWith(byte[] b, int... prefix) {
     if (b.length < prefix.length) {
       return false;
@@ -560,11 +773,18 @@ final class WorkbookReader {
     return true;
   }
 
-  /** Looks for an ASCII word in the bytes, as ASCII or as UTF-16LE (OLE2 directory names). */
+  /**
+   * Looks for an ASCII word in the bytes, as ASCII or as UTF-16LE (OLE2 directory names): first in
+   * the last 64 KiB, where a zip's central directory names every entry, then everywhere.
+   */
   private static boolean contains(byte[] b, String word, boolean utf16) {
     byte[] w = word.getBytes(utf16 ? StandardCharsets.UTF_16LE : StandardCharsets.US_ASCII);
+    return contains(b, w, Math.max(0, b.length - 65_536)) || contains(b, w, 0);
+  }
+
+  private static boolean contains(byte[] b, byte[] w, int from) {
     outer:
-    for (int i = 0; i + w.length <= b.length; i++) {
+    for (int i = from; i + w.length <= b.length; i++) {
       for (int j = 0; j < w.length; j++) {
         if (b[i + j] != w[j]) {
           continue outer;
