@@ -140,4 +140,21 @@ class WorkbookImportTest {
         run.err());
     assertFalse(run.err().contains("\tat "), run.err());
   }
+
+  @Test
+  void aSeparateProcessPrintsOnlyRifflesOwnLinesOnStderr() throws Exception {
+    byte[] whole = Files.readAllBytes(workbook());
+    Path cut = dir.resolve("cut.xlsx");
+    Files.write(cut, java.util.Arrays.copyOf(whole, whole.length / 3));
+    ChildRiffle child = ChildRiffle.fromClassPath(dir.resolve("home"));
+    String project = dir.resolve("shop.riffle").toString();
+    CliTest.Run bad = child.run("import", "--project", project, "--file", cut.toString());
+    assertEquals(2, bad.code(), bad.err());
+    assertEquals(1, bad.err().lines().count(), "POI's own warnings stay off stderr: " + bad.err());
+    CliTest.Run good =
+        child.run("import", "--project", project, "--file", workbook().toString(), "--wave", "W");
+    assertEquals(0, good.code(), good.err());
+    assertFalse(good.err().contains("StatusLogger"), good.err());
+    assertFalse(good.err().contains("WARN"), good.err());
+  }
 }
