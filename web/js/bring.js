@@ -66,6 +66,7 @@ export function mount(section, context) {
   els.readPaste = h('button', { type: 'button', id: 'bring-read', on: { click: readPaste } }, 'Read the pasted cells');
   els.delimiter = h('select', { id: 'bring-delimiter', on: { change: reread } }, options(DELIMITERS, 'auto'));
   els.encoding = h('select', { id: 'bring-encoding', on: { change: reread } }, options(ENCODINGS, 'auto'));
+  els.sheet = h('input', { type: 'text', id: 'bring-sheet', autocomplete: 'off', placeholder: 'first with data', on: { change: reread } });
 
   els.previewBox = h('section', { class: 'panel', id: 'bring-preview', 'aria-labelledby': 'h-bring-preview', hidden: true });
   els.waveBox = h('section', { class: 'panel', id: 'bring-wave', 'aria-labelledby': 'h-bring-wave', hidden: true });
@@ -125,8 +126,9 @@ export function mount(section, context) {
             { class: 'fields' },
             h('div', { class: 'field' }, h('label', { for: 'bring-delimiter' }, 'Delimiter'), els.delimiter),
             h('div', { class: 'field' }, h('label', { for: 'bring-encoding' }, 'Encoding'), els.encoding),
+            h('div', { class: 'field' }, h('label', { for: 'bring-sheet' }, 'Sheet (workbooks)'), els.sheet),
           ),
-          h('p', { class: 'hint' }, 'Both are detected; change them when the preview looks wrong.'),
+          h('p', { class: 'hint' }, 'Delimiter and encoding are detected; change them when the preview looks wrong. A workbook is read from its first visible sheet with data unless you name a sheet or give its number.'),
         ),
         h(
           'div',
@@ -204,6 +206,7 @@ function request(extra = {}) {
     encoding: els.encoding.value,
     ...extra,
   };
+  if (els.sheet.value.trim()) body.sheet = els.sheet.value.trim();
   if (source.upload) body.upload = source.upload;
   else body.paste = source.paste;
   if (rolesChanged && preview) {
