@@ -5,15 +5,19 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.LocalDateTime;
 import java.util.Arrays;
 import java.util.List;
 import java.util.zip.CRC32;
 import java.util.zip.ZipEntry;
+import java.util.zip.ZipInputStream;
 import java.util.zip.ZipOutputStream;
 import org.apache.poi.hssf.usermodel.HSSFWorkbook;
 import org.apache.poi.poifs.crypt.EncryptionInfo;
@@ -28,11 +32,14 @@ import org.apache.poi.xssf.usermodel.XSSFFont;
 import org.apache.poi.xssf.usermodel.XSSFRichTextString;
 import org.apache.poi.xssf.usermodel.XSSFWorkbook;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import riffle.model.ColumnRole;
 import riffle.model.InputProblem;
 
 /** Excel workbooks read as the CSV path reads their CSV twin, and bad workbooks refused safely. */
 class WorkbookReaderTest {
+  @TempDir Path dir;
+
   private static final String QUESTION = "What almost stopped you from ordering?";
 
   private static final Object[] HEADER = {"id", "date", QUESTION, "device"};
@@ -373,15 +380,27 @@ class WorkbookReaderTest {
 
   @Test
   void aZipBombIsRefusedByPoisZipLimits() throws IOException {
+    // A real workbook whose sheet part is padded with 40 MiB of spaces: valid, and a bomb.
     ByteArrayOutputStream out = new ByteArrayOutputStream();
-    try (ZipOutputStream zip = new ZipOutputStream(out)) {
-      zip.putNextEntry(new ZipEntry("[Content_Types].xml"));
-      zip.write("<Types/>".getBytes(StandardCharsets.US_ASCII));
-      zip.putNextEntry(new ZipEntry("xl/workbook.xml"));
-      byte[] spaces = new byte[1 << 20];
-      Arrays.fill(spaces, (byte) ' ');
-      for (int i = 0; i < 40; i++) {
-        zip.write(spaces);
+    try (ZipInputStream in =
+            new ZipInputStream(new ByteArrayInputStream(Workbooks.of("Answers", answers())));
+        ZipOutputStream zip = new ZipOutputStream(out)) {
+      for (ZipEntry e = in.getNextEntry(); e != null; e = in.getNextEntry()) {
+        zip.putNextEntry(new ZipEntry(e.getName()));
+        byte[] part = in.readAllBytes();
+        if (!e.getName().equals("xl/worksheets/sheet1.xml")) {
+          zip.write(part);
+          continue;
+        }
+        String xml = new String(part, StandardCharsets.UTF_8);
+        int at = xml.indexOf("<sheetData>");
+        zip.write(xml.substring(0, at).getBytes(StandardCharsets.UTF_8));
+        byte[] spaces = new byte[1 << 20];
+        Arrays.fill(spaces, (byte) ' ');
+        for (int i = 0; i < 40; i++) {
+          zip.write(spaces);
+        }
+        zip.write(xml.substring(at).getBytes(StandardCharsets.UTF_8));
       }
     }
     assertTrue(out.size() < 200_000, "40 MiB packed into " + out.size() + " bytes");
@@ -390,5 +409,16 @@ class WorkbookReaderTest {
             + " refused as a possible zip bomb; open it in the spreadsheet program, save it as"
             + " .xlsx or CSV and import that",
         refusal(out.toByteArray(), ImportSettings.defaults()));
+    Path file = dir.resolve("bomb.xlsx");
+    Files.write(file, out.toByteArray());
+    UnreadableInputException fromDisk =
+        assertThrows(
+            UnreadableInputException.class,
+            () -> SurveyReader.readFile(file, ImportSettings.defaults()));
+    assertEquals(
+        "bomb.xlsx: the workbook unpacks to far more data than its size suggests, which is"
+            + " refused as a possible zip bomb; open it in the spreadsheet program, save it as"
+            + " .xlsx or CSV and import that",
+        fromDisk.getMessage());
   }
 }
