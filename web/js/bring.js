@@ -57,7 +57,7 @@ export function mount(section, context) {
   els.file = h('input', {
     type: 'file',
     id: 'bring-file',
-    accept: '.csv,.tsv,.txt,text/csv,text/tab-separated-values',
+    accept: '.csv,.tsv,.txt,.xlsx,.xlsm,text/csv,text/tab-separated-values,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
     on: { change: chooseFile },
   });
   els.fileError = h('div', { class: 'error', id: 'bring-file-error', role: 'alert', hidden: true });
@@ -73,6 +73,7 @@ export function mount(section, context) {
   els.delimiter = h('select', { id: 'bring-delimiter', on: { change: reread } }, options(DELIMITERS, 'auto'));
   els.encoding = h('select', { id: 'bring-encoding', on: { change: reread } }, options(ENCODINGS, 'auto'));
   els.dateOrder = h('select', { id: 'bring-date-order', on: { change: reread } }, options(DATE_ORDERS, 'auto'));
+  els.sheet = h('input', { type: 'text', id: 'bring-sheet', autocomplete: 'off', placeholder: 'first with data', on: { change: reread } });
 
   els.previewBox = h('section', { class: 'panel', id: 'bring-preview', 'aria-labelledby': 'h-bring-preview', hidden: true });
   els.waveBox = h('section', { class: 'panel', id: 'bring-wave', 'aria-labelledby': 'h-bring-wave', hidden: true });
@@ -124,7 +125,7 @@ export function mount(section, context) {
         h(
           'div',
           { class: 'field' },
-          h('label', { for: 'bring-file' }, 'A file (CSV or TSV)'),
+          h('label', { for: 'bring-file' }, 'A file (CSV, TSV or Excel .xlsx)'),
           els.file,
           els.fileError,
           h(
@@ -133,8 +134,9 @@ export function mount(section, context) {
             h('div', { class: 'field' }, h('label', { for: 'bring-delimiter' }, 'Delimiter'), els.delimiter),
             h('div', { class: 'field' }, h('label', { for: 'bring-encoding' }, 'Encoding'), els.encoding),
             h('div', { class: 'field' }, h('label', { for: 'bring-date-order' }, 'Dates'), els.dateOrder),
+            h('div', { class: 'field' }, h('label', { for: 'bring-sheet' }, 'Sheet (workbooks)'), els.sheet),
           ),
-          h('p', { class: 'hint' }, 'All three are detected; change them when the preview looks wrong.'),
+          h('p', { class: 'hint' }, 'Delimiter, encoding and date order are detected; change them when the preview looks wrong. A workbook is read from its first visible sheet with data unless you name a sheet or give its number.'),
         ),
         h(
           'div',
@@ -213,6 +215,7 @@ function request(extra = {}) {
     date_order: els.dateOrder.value,
     ...extra,
   };
+  if (els.sheet.value.trim()) body.sheet = els.sheet.value.trim();
   if (source.upload) body.upload = source.upload;
   else body.paste = source.paste;
   if (rolesChanged && preview) {
@@ -324,8 +327,8 @@ function showPreview() {
     h(
       'p',
       { class: 'readas', id: 'bring-readas' },
-      p.encoding === 'pasted text' ? 'Pasted text' : `Read as ${detectedLabel(p.encoding, p.encoding_detected)}`,
-      `, columns separated by ${detectedLabel(p.delimiter, p.delimiter_detected)} · `,
+      p.encoding === 'pasted text' ? 'Pasted text' : p.encoding.startsWith('Excel workbook') ? `Read from the ${p.encoding}` : `Read as ${detectedLabel(p.encoding, p.encoding_detected)}`,
+      p.encoding.startsWith('Excel workbook') ? ' · ' : `, columns separated by ${detectedLabel(p.delimiter, p.delimiter_detected)} · `,
       h('strong', {}, plural(p.total_rows, 'row')),
       ' to bring in',
       p.skipped_rows ? ` · ${plural(p.skipped_rows, 'row')} left out` : '',

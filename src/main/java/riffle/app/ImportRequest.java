@@ -135,6 +135,12 @@ public final class ImportRequest {
       return this;
     }
 
+    /** The sheet of a workbook to read, by name or 1-based number; null for the default. */
+    public Builder sheet(String sheet) {
+      settings.sheet(sheet);
+      return this;
+    }
+
     /** An open-text question column; repeatable. */
     public Builder textColumn(String header) {
       settings.textColumn(header);

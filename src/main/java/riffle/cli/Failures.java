@@ -34,6 +34,7 @@ final class Failures implements CommandLine.IExecutionExceptionHandler {
           Map.entry("delimiter", "--delimiter"),
           Map.entry("date order", "--date-order"),
           Map.entry("encoding", "--encoding"),
+          Map.entry("sheet", "--sheet"),
           Map.entry("text column", "--text-column"),
           Map.entry("id column", "--id-column"),
           Map.entry("date column", "--date-column"),

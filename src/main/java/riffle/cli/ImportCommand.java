@@ -20,6 +20,7 @@ import riffle.app.ImportReport;
 import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
 import riffle.app.Project;
+import riffle.ingest.SurveyTable;
 import riffle.model.ColumnRole;
 import riffle.model.InputProblem;
 
@@ -28,7 +29,8 @@ import riffle.model.InputProblem;
     name = "import",
     mixinStandardHelpOptions = true,
     description = {
-      "Brings a survey export (CSV/TSV file, or cells pasted on standard input) in as a " + "wave.",
+      "Brings a survey export (CSV/TSV file, an Excel .xlsx workbook's sheet, or cells pasted on"
+          + " standard input) in as a wave.",
       "Encoding, delimiter and column roles are detected unless named. Importing the same "
           + "rows into the same wave again adds nothing. An unusable file changes nothing and "
           + "exits 2."
@@ -142,6 +144,14 @@ final class ImportCommand implements Callable<Integer> {
       description = "Refuse exports with more than N columns (default: ${DEFAULT-VALUE}).")
   int maxColumns;
 
+  @Option(
+      names = "--sheet",
+      paramLabel = "NAME|N",
+      description =
+          "The sheet of an .xlsx workbook to read, by name or number (default: the first visible"
+              + " sheet with data).")
+  String sheet;
+
   @Mixin JsonOption json;
 
   @Override
@@ -159,7 +169,8 @@ final class ImportCommand implements Callable<Integer> {
             .delimiter(delimiter)
             .encoding(encoding)
             .maxMegabytes(maxMb)
-            .maxColumns(maxColumns);
+            .maxColumns(maxColumns)
+            .sheet(sheet);
     textColumns.forEach(request::textColumn);
     codesColumns.forEach(request::codesColumn);
     metaColumns.forEach(request::metaColumn);
@@ -191,7 +202,11 @@ final class ImportCommand implements Callable<Integer> {
         r.fieldedOn(),
         r.dated(),
         r.source());
-    out.printf(Locale.ROOT, "  read as %s, %s-separated%n", r.encoding(), r.delimiter());
+    if (r.encoding().startsWith(SurveyTable.WORKBOOK)) {
+      out.printf(Locale.ROOT, "  read from the %s%n", r.encoding());
+    } else {
+      out.printf(Locale.ROOT, "  read as %s, %s-separated%n", r.encoding(), r.delimiter());
+    }
     out.println("  columns:");
     for (ImportReport.ColumnReport c : r.columns()) {
       out.printf(Locale.ROOT, "    %-14s %s  (%s)%n", roleLabel(c.role()), c.header(), c.reason());

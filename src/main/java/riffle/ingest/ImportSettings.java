@@ -48,6 +48,7 @@ public final class ImportSettings {
   private final int maxProblems;
   private final int maxColumns;
   private final Optional<DateOrder> dateOrder;
+  private final Optional<String> sheet;
 
   private ImportSettings(Builder b) {
     this.delimiter = Optional.ofNullable(b.delimiter);
@@ -63,6 +64,7 @@ public final class ImportSettings {
     this.maxProblems = b.maxProblems;
     this.maxColumns = b.maxColumns;
     this.dateOrder = Optional.ofNullable(b.dateOrder);
+    this.sheet = Optional.ofNullable(b.sheet);
   }
 
   /** Whether numeric dates are day-first or month-first; empty to decide from the date column. */
@@ -142,6 +144,14 @@ public final class ImportSettings {
     return maxColumns;
   }
 
+  /**
+   * Returns the sheet of a workbook to read, by name or 1-based number; empty means the first
+   * visible sheet with data. Text inputs have no sheets.
+   */
+  public Optional<String> sheet() {
+    return sheet;
+  }
+
   /** Returns each named column with the option that named it, in a fixed option order. */
   Map<String, List<String>> namedColumns() {
     Map<String, List<String>> named = new LinkedHashMap<>();
@@ -169,6 +179,7 @@ public final class ImportSettings {
         + maxProblems
         + ", maxColumns="
         + maxColumns
+        + sheet.map(n -> ", sheet=" + n).orElse("")
         + "]";
   }
 
@@ -198,6 +209,7 @@ public final class ImportSettings {
     private int maxProblems = DEFAULT_MAX_PROBLEMS;
     private int maxColumns = DEFAULT_MAX_COLUMNS;
     private DateOrder dateOrder;
+    private String sheet;
 
     private Builder() {}
 
@@ -302,6 +314,17 @@ public final class ImportSettings {
     /** Sets the most columns a header may have; must be positive. */
     public Builder maxColumns(int maxColumns) {
       this.maxColumns = maxColumns;
+      return this;
+    }
+
+    /**
+     * Sets the sheet of a workbook to read.
+     *
+     * @param sheet a sheet's name or 1-based number, or null (or blank) for the first visible sheet
+     *     with data
+     */
+    public Builder sheet(String sheet) {
+      this.sheet = sheet == null || sheet.isBlank() ? null : sheet.strip();
       return this;
     }
 

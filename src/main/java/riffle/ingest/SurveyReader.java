@@ -5,14 +5,16 @@ import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import riffle.model.InputProblem;
 
 /**
- * Reads a survey export (a CSV/TSV file, or cells pasted from a spreadsheet) into a {@link
- * SurveyTable}. The front door of the ingest stage; stateless and thread-safe.
+ * Reads a survey export (a CSV/TSV file, one sheet of an Excel .xlsx workbook, or cells pasted from
+ * a spreadsheet) into a {@link SurveyTable}. The front door of the ingest stage; stateless and
+ * thread-safe.
  *
  * <p>Problems in single rows are collected in the table; an input that cannot be used at all throws
  * {@link UnreadableInputException} with a positioned message an analyst can act on.
@@ -54,11 +56,13 @@ public final class SurveyReader {
     } catch (IOException e) {
       throw unreadable(source, "file cannot be read (" + e.getMessage() + ")");
     }
-    return readBytes(source, bytes, settings);
+    return read(source, bytes, file, settings);
   }
 
   /**
-   * Reads an export from memory.
+   * Reads an export from memory. A zip archive holding {@code xl/workbook.xml} is read as an Excel
+   * workbook (see {@link WorkbookReader}), whatever its name; an old .xls, an .xlsb, an .ods or an
+   * encrypted workbook is refused with what to do.
    *
    * @param source the name used in the table and in messages, usually the file name
    * @param bytes the whole export
@@ -71,13 +75,59 @@ public final class SurveyReader {
     Objects.requireNonNull(bytes, "bytes");
     Objects.requireNonNull(settings, "settings");
     checkSize(source, bytes.length, settings, "file");
+    return read(source, bytes, null, settings);
+  }
+
+  /** Reads the bytes of an export, a workbook from {@code file} when it is on disk. */
+  private static SurveyTable read(String source, byte[] bytes, Path file, ImportSettings settings)
+      throws UnreadableInputException {
     try {
+      WorkbookReader.refuseOtherSpreadsheets(bytes);
+      if (WorkbookReader.isWorkbook(bytes)) {
+        return readWorkbook(
+            source,
+            file == null
+                ? WorkbookReader.read(bytes, settings)
+                : WorkbookReader.read(file, settings),
+            settings);
+      }
       EncodingSniffer.Decoded d = EncodingSniffer.decode(bytes, settings.encoding());
+      List<EncodingSniffer.Warning> warnings = new ArrayList<>(d.warnings());
+      settings
+          .sheet()
+          .ifPresent(
+              s ->
+                  warnings.add(
+                      new EncodingSniffer.Warning(
+                          0,
+                          "the sheet setting ('"
+                              + s
+                              + "') applies to Excel workbooks only; this file was read as text")));
       return TableParser.parse(
-          new TableParser.Input(source, d.text(), d.label(), d.detected(), d.warnings(), false),
+          new TableParser.Input(source, d.text(), d.label(), d.detected(), warnings, false),
           settings);
     } catch (BadInput e) {
       throw new UnreadableInputException(e.at(source));
+    }
+  }
+
+  /**
+   * Reads one sheet of a workbook; problems in it name the file and the sheet ({@code
+   * wave.xlsx:Answers:17:3}), the line being the sheet's row number and the column its number.
+   */
+  private static SurveyTable readWorkbook(
+      String source, WorkbookReader.Sheet sheet, ImportSettings settings)
+      throws UnreadableInputException {
+    String at = source + ":" + sheet.name();
+    try {
+      return TableParser.parseSheet(
+          at,
+          WorkbookReader.LABEL + " (sheet '" + sheet.name() + "')",
+          sheet.records(),
+          sheet.notes(),
+          settings);
+    } catch (BadInput e) {
+      throw new UnreadableInputException(e.at(at));
     }
   }
 

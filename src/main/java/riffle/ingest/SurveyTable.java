@@ -8,9 +8,11 @@ import riffle.model.InputProblem;
 /**
  * A survey export read into rows, with the role of every column and the problems found. Immutable.
  *
- * @param source the file name, or {@code "paste"}
+ * @param source the file name, or {@code "paste"}; for a workbook the file and sheet names, {@code
+ *     "wave.xlsx:Answers"}
  * @param encoding how the bytes were decoded, e.g. {@code "UTF-8"}, {@code "UTF-8 (BOM)"}, {@code
- *     "UTF-16LE (BOM)"}, {@code "windows-1252"}; {@code "pasted text"} for a paste
+ *     "UTF-16LE (BOM)"}, {@code "windows-1252"}; {@code "pasted text"} for a paste; {@code "Excel
+ *     workbook (sheet 'Answers')"} for a workbook (whose delimiter is then comma, not detected)
  * @param delimiter the field separator used
  * @param delimiterDetected true when the delimiter was sniffed rather than given
  * @param encodingDetected true when the encoding was sniffed rather than given
@@ -31,6 +33,9 @@ public record SurveyTable(
     List<SurveyRow> rows,
     List<InputProblem> problems,
     int skippedRows) {
+  /** How {@link #encoding()} begins for a table read from a workbook's sheet. */
+  public static final String WORKBOOK = WorkbookReader.LABEL;
+
   public SurveyTable {
     Objects.requireNonNull(source, "source");
     Objects.requireNonNull(encoding, "encoding");

@@ -9,8 +9,9 @@ import riffle.model.ColumnRole;
 import riffle.model.ControlChars;
 
 /**
- * Turns decoded text into a {@link SurveyTable}: delimiter, records, header, the ragged-row policy
- * (see the package documentation) and column roles.
+ * Turns decoded text, or the records of a workbook's sheet, into a {@link SurveyTable}: delimiter
+ * and records (text only), header, the ragged-row policy (see the package documentation) and column
+ * roles, the same for both.
  */
 final class TableParser {
   /** Decoded input and how it was decoded. */
@@ -44,12 +45,103 @@ final class TableParser {
       delimiter = DelimiterSniffer.sniff(text, in.paste());
     }
     List<CsvRecords.Raw> records = CsvRecords.read(text, delimiter);
-    int h = excelHint != null ? 1 : 0;
+    Body body =
+        body(
+            records,
+            excelHint != null ? 1 : 0,
+            in.paste() ? "the pasted text is empty" : "file is empty",
+            problems,
+            settings);
+    int ragged = body.ragged();
+    int kept = body.rows().size() + ragged;
+    int width = body.names().length;
+    if (ragged * 2 > kept) {
+      throw new BadInput(
+          0,
+          0,
+          ragged
+              + " of "
+              + kept
+              + " rows have a different number of fields than the header, which has "
+              + width
+              + " with the delimiter "
+              + delimiter.label()
+              + (delimiterDetected ? " (detected)" : " (as given)")
+              + "; the delimiter is probably wrong: set it (comma, semicolon, tab or pipe)",
+          "delimiter");
+    }
+    if (text.indexOf('"') >= 0) {
+      for (long[] q :
+          QuoteScanner.strayQuotes(text, delimiter.character(), settings.maxProblems())) {
+        problems.add(
+            q[0],
+            (int) q[1],
+            "the quote that opens this answer closes "
+                + (q[2] == q[0] ? "on the same line" : "on line " + q[2])
+                + " but more text follows it; if the answer took in the rows after it, put the"
+                + " quotes right in the file or re-export");
+      }
+    }
+    return table(
+        body,
+        in.source(),
+        in.encoding(),
+        in.encodingDetected(),
+        delimiter,
+        delimiterDetected,
+        problems);
+  }
+
+  /**
+   * Builds the table from the records of a workbook's sheet: no delimiter or quotes, and no ragged
+   * rows, as every record is as wide as the widest row.
+   *
+   * @param source the file and sheet, as problems name them
+   * @param encoding how the input was read, such as {@code Excel workbook (sheet 'Answers')}
+   * @param notes problems about the whole sheet
+   */
+  static SurveyTable parseSheet(
+      String source,
+      String encoding,
+      List<CsvRecords.Raw> records,
+      List<String> notes,
+      ImportSettings settings)
+      throws BadInput {
+    ProblemList problems = new ProblemList(source, settings.maxProblems());
+    for (String note : notes) {
+      problems.add(0, 0, note);
+    }
+    Body body = body(records, 0, "the sheet is empty", problems, settings);
+    return table(body, source, encoding, true, Delimiter.COMMA, false, problems);
+  }
+
+  /**
+   * The header and rows of the records: the header is the first non-blank record from {@code
+   * first}; blank records are skipped and counted, ragged ones skipped and reported.
+   */
+  private record Body(
+      long headerLine,
+      String[] names,
+      String[] shortNames,
+      ColumnRole[] named,
+      List<SurveyRow> rows,
+      int ragged,
+      int blank,
+      int trailingBlank) {}
+
+  private static Body body(
+      List<CsvRecords.Raw> records,
+      int first,
+      String empty,
+      ProblemList problems,
+      ImportSettings settings)
+      throws BadInput {
+    int h = first;
     while (h < records.size() && isBlank(records.get(h).cells())) {
       h++;
     }
     if (h >= records.size()) {
-      throw new BadInput(in.paste() ? "the pasted text is empty" : "file is empty");
+      throw new BadInput(empty);
     }
     CsvRecords.Raw header = records.get(h);
     int width = width(header.cells(), records, h);
@@ -82,13 +174,13 @@ final class TableParser {
     }
     String[] names = HeaderNames.of(headers, width, header.line(), problems);
     ColumnRole[] named = RoleDetector.named(names, shortNames, settings, header.line());
-    int first = worded ? h + 2 : h + 1;
+    int data = worded ? h + 2 : h + 1;
 
     List<SurveyRow> rows = new ArrayList<>(Math.max(16, records.size() - h - 1));
     int ragged = 0;
     int blank = 0;
     int trailingBlank = 0;
-    for (int r = first; r < records.size(); r++) {
+    for (int r = data; r < records.size(); r++) {
       CsvRecords.Raw rec = records.get(r);
       String[] cells = rec.cells();
       if (isBlank(cells)) {
@@ -98,56 +190,43 @@ final class TableParser {
       }
       trailingBlank = 0;
       if (fits(cells, width, header.cells())) {
-        rows.add(new SurveyRow(r - first + 1, rec.line(), List.of(fit(cells, width))));
+        rows.add(new SurveyRow(r - data + 1, rec.line(), List.of(fit(cells, width))));
       } else {
         ragged++;
         problems.add(rec.line(), 0, raggedMessage(cells, width, rec.line()));
       }
     }
-    int kept = rows.size() + ragged;
-    if (kept == 0) {
+    if (rows.size() + ragged == 0) {
       throw new BadInput(header.line(), 0, "no answers below the header");
     }
-    if (ragged * 2 > kept) {
-      throw new BadInput(
-          0,
-          0,
-          ragged
-              + " of "
-              + kept
-              + " rows have a different number of fields than the header, which has "
-              + width
-              + " with the delimiter "
-              + delimiter.label()
-              + (delimiterDetected ? " (detected)" : " (as given)")
-              + "; the delimiter is probably wrong: set it (comma, semicolon, tab or pipe)",
-          "delimiter");
-    }
-    if (text.indexOf('"') >= 0) {
-      for (long[] q :
-          QuoteScanner.strayQuotes(text, delimiter.character(), settings.maxProblems())) {
-        problems.add(
-            q[0],
-            (int) q[1],
-            "the quote that opens this answer closes "
-                + (q[2] == q[0] ? "on the same line" : "on line " + q[2])
-                + " but more text follows it; if the answer took in the rows after it, put the"
-                + " quotes right in the file or re-export");
-      }
-    }
+    return new Body(header.line(), names, shortNames, named, rows, ragged, blank, trailingBlank);
+  }
+
+  private static SurveyTable table(
+      Body body,
+      String source,
+      String encoding,
+      boolean encodingDetected,
+      Delimiter delimiter,
+      boolean delimiterDetected,
+      ProblemList problems)
+      throws BadInput {
+    List<SurveyRow> rows = body.rows();
     List<SurveyRow> sample = rows.subList(0, Math.min(rows.size(), RoleDetector.SAMPLE));
-    List<Column> columns = RoleDetector.detect(names, shortNames, named, sample, header.line());
+    List<Column> columns =
+        RoleDetector.detect(
+            body.names(), body.shortNames(), body.named(), sample, body.headerLine());
     checkCodeNames(columns, rows);
     return new SurveyTable(
-        in.source(),
-        in.encoding(),
+        source,
+        encoding,
         delimiter,
         delimiterDetected,
-        in.encodingDetected(),
+        encodingDetected,
         columns,
         rows,
         problems.list(),
-        ragged + blank - trailingBlank);
+        body.ragged() + body.blank() - body.trailingBlank());
   }
 
   /** Codes in a codes column become code names, which may not hold a control character. */

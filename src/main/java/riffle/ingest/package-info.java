@@ -1,7 +1,8 @@
 /**
- * Ingest: turns the bytes of a survey export (a CSV/TSV file, or cells pasted from a spreadsheet)
- * into a table of rows with column roles and a bounded list of positioned problems. Depends on
- * {@code riffle.model} and Apache Commons CSV only.
+ * Ingest: turns the bytes of a survey export (a CSV/TSV file, one sheet of an Excel .xlsx workbook,
+ * or cells pasted from a spreadsheet) into a table of rows with column roles and a bounded list of
+ * positioned problems. Depends on {@code riffle.model}, Apache Commons CSV and Apache POI
+ * (workbooks only, in {@code WorkbookReader}).
  *
  * <p>The front door is {@link riffle.ingest.SurveyReader}, configured by {@link
  * riffle.ingest.ImportSettings} and returning a {@link riffle.ingest.SurveyTable}. Behind it, in

@@ -84,8 +84,9 @@
  * filters; its count is the answers inside the filters whose piece has that wording — the same
  * stems in the same order, case and punctuation aside — never those of a longer or shorter piece
  * near it ("said this way by 14 buyers"); its text is the exact form most of those answers wrote;
- * and its score is multiplied by the popularity factor 1 + 0.1·ln(count). Grouping runs over all waves and segments; a wording is <b>new</b> when the
- * settings name the latest wave and every answer of its group is from that wave.
+ * and its score is multiplied by the popularity factor 1 + 0.1·ln(count). Grouping runs over all
+ * waves and segments; a wording is <b>new</b> when the settings name the latest wave and every
+ * answer of its group is from that wave.
  *
  * <h2>Candidates by use</h2>
  *

@@ -51,7 +51,8 @@ final class Imports implements AutoCloseable {
 
   /**
    * What to read and how: exactly one of {@code upload} (an id from {@code POST /api/uploads}) and
-   * {@code paste} (pasted cells), then the reading options, each optional.
+   * {@code paste} (pasted cells), then the reading options, each optional ({@code sheet} names a
+   * workbook's sheet by name or number).
    */
   record Source(
       String upload,
@@ -59,6 +60,7 @@ final class Imports implements AutoCloseable {
       String delimiter,
       String encoding,
       String dateOrder,
+      String sheet,
       List<ColumnChoice> columns,
       String wave,
       String date,
@@ -257,6 +259,7 @@ final class Imports implements AutoCloseable {
     } catch (InputException e) {
       throw ApiError.badField("date_order", e.getMessage());
     }
+    b.sheet(s.sheet());
     if (s.wave() != null) {
       if (s.wave().isBlank()) {
         throw ApiError.badField("wave", "the wave needs a name");

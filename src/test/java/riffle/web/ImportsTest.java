@@ -22,7 +22,7 @@ class ImportsTest {
           .getBytes(StandardCharsets.UTF_8);
 
   private static Imports.Source upload(String id) {
-    return new Imports.Source(id, null, null, null, null, null, null, null, null);
+    return new Imports.Source(id, null, null, null, null, null, null, null, null, null);
   }
 
   /** A body of {@code n} bytes made as it is read, never held whole. */

@@ -144,6 +144,31 @@ class WebBrowserTest {
   }
 
   @Test
+  void aWorkbookIsChosenAndPreviewedFromItsSheet() throws Exception {
+    open("bring");
+    WebElement file = driver.findElement(By.id("bring-file"));
+    assertTrue(file.getDomAttribute("accept").contains(".xlsx"), file.getDomAttribute("accept"));
+    Path book = Files.createTempFile("choose-", ".xlsx");
+    Files.write(
+        book,
+        riffle.ingest.Workbooks.of(
+            "Answers",
+            new Object[] {"respondent", "What made you choose us?"},
+            new Object[] {"B-1", "Half the price of a new grinder, and it looked new"},
+            new Object[] {"B-2", "The chat answered my question about the warranty in minutes"},
+            new Object[] {"B-3", "Free returns for thirty days made it an easy yes"}));
+    file.sendKeys(book.toString());
+    waiting().until(ExpectedConditions.visibilityOfElementLocated(By.id("bring-table")));
+    String readAs = driver.findElement(By.id("bring-readas")).getText();
+    assertTrue(readAs.contains("Read from the Excel workbook (sheet 'Answers')"), readAs);
+    assertTrue(readAs.contains("3 rows"), readAs);
+    assertTrue(
+        driver.findElement(By.id("bring-table")).getText().contains("Free returns"),
+        driver.findElement(By.id("bring-table")).getText());
+    Files.delete(book);
+  }
+
+  @Test
   void aBadPasteShowsItsErrorWhereItHappened() throws Exception {
     open("bring");
     paste(Files.readString(WebServerTest.fixture("unclosed-quote.tsv"), StandardCharsets.UTF_8));

@@ -385,6 +385,43 @@ class WebServerTest {
     assertEquals(200, get("/api/search?q=" + q("wave:\"Wave 2\" AND warranty")).status());
   }
 
+  @Test
+  void aWorkbookUploadIsPreviewedSheetBySheet() throws Exception {
+    org.apache.poi.xssf.usermodel.XSSFWorkbook wb =
+        new org.apache.poi.xssf.usermodel.XSSFWorkbook();
+    Object[] header = {"id", "Why did you choose us?"};
+    riffle.ingest.Workbooks.sheet(
+        wb,
+        "Answers",
+        header,
+        new Object[] {1, "The refurbished grinder was half the price of a new one"},
+        new Object[] {2, "Friendly chat support answered within minutes"});
+    riffle.ingest.Workbooks.sheet(
+        wb, "Wave 2", header, new Object[] {3, "The warranty made the used machine feel safe"});
+    Answer upload =
+        send(
+            HttpRequest.newBuilder(server.url().resolve("/api/uploads?name=choose.xlsx"))
+                .header("Origin", origin(server))
+                .POST(HttpRequest.BodyPublishers.ofByteArray(riffle.ingest.Workbooks.bytes(wb))));
+    assertEquals(201, upload.status());
+    String id = upload.json().get("upload").asText();
+    Answer first = post("/api/import/preview", "{\"upload\": \"" + id + "\"}");
+    assertEquals(200, first.status(), first.json() + "");
+    assertEquals("Excel workbook (sheet 'Answers')", first.json().get("encoding").asText());
+    assertEquals(2, first.json().get("total_rows").asInt());
+    assertEquals(
+        "sheet 'Wave 2' (2 rows) was not read; --sheet 2 reads it",
+        first.json().get("problems").get(0).get("message").asText());
+    Answer second =
+        post("/api/import/preview", "{\"upload\": \"" + id + "\", \"sheet\": \"Wave 2\"}");
+    assertEquals(200, second.status(), second.json() + "");
+    assertEquals("choose.xlsx:Wave 2", second.json().get("source").asText());
+    assertEquals(1, second.json().get("total_rows").asInt());
+    Answer none = post("/api/import/preview", "{\"upload\": \"" + id + "\", \"sheet\": \"9\"}");
+    assertEquals(400, none.status(), none.json() + "");
+    assertTrue(none.json().get("error").asText().contains("no sheet '9'"), none.json() + "");
+  }
+
   static JsonNode poll(String job) throws Exception {
     for (int i = 0; i < 1_200; i++) {
       JsonNode state = get("/api/imports/" + job).json();
