@@ -3,6 +3,7 @@ package riffle.app;
 import java.time.LocalDate;
 import java.util.List;
 import riffle.ingest.Column;
+import riffle.ingest.SurveyTable;
 import riffle.model.ColumnRole;
 import riffle.model.InputProblem;
 
@@ -43,6 +44,11 @@ public record ImportReport(
   public ImportReport {
     columns = List.copyOf(columns);
     problems = List.copyOf(problems);
+  }
+
+  /** True when the export was a sheet of an Excel workbook rather than text. */
+  public boolean readFromWorkbook() {
+    return encoding.startsWith(SurveyTable.WORKBOOK);
   }
 
   /**

@@ -20,7 +20,6 @@ import riffle.app.ImportReport;
 import riffle.app.ImportRequest;
 import riffle.app.ImportSource;
 import riffle.app.Project;
-import riffle.ingest.SurveyTable;
 import riffle.model.ColumnRole;
 import riffle.model.InputProblem;
 
@@ -202,7 +201,7 @@ final class ImportCommand implements Callable<Integer> {
         r.fieldedOn(),
         r.dated(),
         r.source());
-    if (r.encoding().startsWith(SurveyTable.WORKBOOK)) {
+    if (r.readFromWorkbook()) {
       out.printf(Locale.ROOT, "  read from the %s%n", r.encoding());
     } else {
       out.printf(Locale.ROOT, "  read as %s, %s-separated%n", r.encoding(), r.delimiter());

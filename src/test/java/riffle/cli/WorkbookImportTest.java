@@ -62,7 +62,9 @@ class WorkbookImportTest {
             "import", "--project", fromBook, "--file", workbook().toString(), "--wave", "W");
     assertEquals(0, run.code(), run.err());
     assertTrue(run.out().contains("read from the Excel workbook (sheet 'Answers')"), run.out());
-    assertTrue(run.out().contains("(fielded 2024-05-09)"), "dated by its answers: " + run.out());
+    assertTrue(
+        run.out().contains("(fielded 2024-05-09: the latest date in column"),
+        "dated by its answers: " + run.out());
     assertTrue(
         run.out()
             .contains(

@@ -55,6 +55,7 @@ class QueueStoreTest {
       s.executeUpdate("DROP TABLE review_queue");
       s.executeUpdate("DROP TABLE answer_read");
       s.executeUpdate("DROP INDEX assignment_by_origin");
+      s.executeUpdate("ALTER TABLE question DROP COLUMN name");
       s.executeUpdate("PRAGMA user_version = 4");
     }
     try (ProjectStore store = ProjectStore.openExisting(file)) {
