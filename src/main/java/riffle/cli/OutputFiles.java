@@ -9,7 +9,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
-import java.util.concurrent.ThreadLocalRandom;
 import riffle.model.InputException;
 import riffle.model.InputProblem;
 
@@ -47,7 +46,9 @@ final class OutputFiles {
             "."
                 + target.getFileName()
                 + "."
-                + Long.toHexString(ThreadLocalRandom.current().nextLong() >>> 1)
+                + ProcessHandle.current().pid()
+                + "-"
+                + Long.toHexString(System.nanoTime())
                 + ".part");
     try {
       try (OutputStream out =
