@@ -186,7 +186,7 @@ class WebBrowserTest {
   void aHostileAnswerIsShownAsText() throws Exception {
     open("phrases");
     driver.findElement(By.tagName("body")).sendKeys("/");
-    waiting().until(d -> d.switchTo().activeElement().getDomAttribute("id").equals("find-query"));
+    waiting().until(d -> "find-query".equals(d.switchTo().activeElement().getDomAttribute("id")));
     driver.switchTo().activeElement().sendKeys("onerror OR \"delivery date\"", Keys.ENTER);
     waiting().until(d -> !d.findElements(By.cssSelector("#find-hits .hit")).isEmpty());
     List<String> answers =
